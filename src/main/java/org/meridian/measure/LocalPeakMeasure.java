@@ -1,0 +1,90 @@
+package org.meridian.measure;
+
+import org.meridian.core.Unit;
+
+/**
+ * {@code local-peak} and {@code local-peak-latency}: the largest sample in the window (for
+ * negative polarity the most negative) that is larger than both adjacent samples and larger
+ * than the mean of the k samples on each side, k the neighbourhood in samples (DESIGN §6.3;
+ * the local peak amplitude described by Luck, 2014, An Introduction to the Event-Related
+ * Potential Technique). Neighbours outside the window are used where the data has them;
+ * near the ends of the data the side means use the samples that exist, and the first and last
+ * samples of the data never qualify. Comparisons are strict, so a flat top does not qualify.
+ *
+ * <p>When no sample qualifies, the window maximum is reported instead, marked with the qualifier
+ * {@code window maximum} and a warning.
+ */
+final class LocalPeakMeasure implements Measure {
+    static final String FALLBACK = "window maximum";
+    private final boolean latency;
+
+    LocalPeakMeasure(boolean latency) {
+        this.latency = latency;
+    }
+
+    @Override
+    public String name() {
+        return latency ? "local-peak-latency" : "local-peak";
+    }
+
+    @Override
+    public String unit(Unit dataUnit) {
+        return latency ? "ms" : dataUnit.symbol();
+    }
+
+    @Override
+    public String description() {
+        return latency ? "time of the local peak"
+                : "largest sample exceeding its neighbours and the mean of k samples on each side";
+    }
+
+    @Override
+    public void check(MeasureSettings settings) {
+        PeakMeasure.requirePeakPolarity(name(), settings);
+    }
+
+    @Override
+    public Score score(Trace t, MeasureSettings settings) {
+        int k = settings.neighbourhoodSamples(t.axis().rateHz());
+        int i = localPeakIndex(t, settings.polarity(), k);
+        if (i >= 0) {
+            return Score.of(latency ? t.timeMs(i) : t.values()[i]);
+        }
+        int m = t.extremeIndex(settings.polarity());
+        return Score.fallback(latency ? t.timeMs(m) : t.values()[m], FALLBACK,
+                "no local " + (settings.polarity() == Polarity.NEGATIVE ? "negative" : "positive")
+                + " peak in the window (±" + k + " samples); the window "
+                + (settings.polarity() == Polarity.NEGATIVE ? "minimum" : "maximum") + " is reported");
+    }
+
+    /** The local peak's sample index, or −1 when no sample in the window qualifies. */
+    static int localPeakIndex(Trace t, Polarity polarity, int k) {
+        double[] x = t.values();
+        int n = x.length;
+        int sign = polarity.sign();
+        int lo = Math.max(0, t.from() - k);
+        int hi = Math.min(n - 1, t.to() + k);
+        // prefix[j] = Σ sign·x[lo .. lo + j − 1]
+        double[] prefix = new double[hi - lo + 2];
+        for (int j = lo; j <= hi; j++) {
+            prefix[j - lo + 1] = prefix[j - lo] + sign * x[j];
+        }
+        int best = -1;
+        double bestValue = Double.NEGATIVE_INFINITY;
+        for (int i = Math.max(1, t.from()); i <= Math.min(n - 2, t.to()); i++) {
+            double v = sign * x[i];
+            if (v <= bestValue || v <= sign * x[i - 1] || v <= sign * x[i + 1]) {
+                continue;
+            }
+            int left = Math.max(lo, i - k);
+            int right = Math.min(hi, i + k);
+            double leftMean = (prefix[i - lo] - prefix[left - lo]) / (i - left);
+            double rightMean = (prefix[right - lo + 1] - prefix[i - lo + 1]) / (right - i);
+            if (v > leftMean && v > rightMean) {
+                best = i;
+                bestValue = v;
+            }
+        }
+        return best;
+    }
+}
