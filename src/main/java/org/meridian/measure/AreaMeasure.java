@@ -27,16 +27,6 @@ final class AreaMeasure implements Measure {
 
     @Override
     public Score score(Trace t, MeasureSettings settings) {
-        return Score.of(area(t, settings.polarity()));
-    }
-
-    static double area(Trace t, Polarity polarity) {
-        double[] x = t.values();
-        double dt = t.stepMs();
-        double sum = 0;
-        for (int i = t.from(); i < t.to(); i++) {
-            sum += SegmentArea.of(x[i], x[i + 1], dt, polarity);
-        }
-        return sum;
+        return Score.of(t.area(settings.polarity()));
     }
 }

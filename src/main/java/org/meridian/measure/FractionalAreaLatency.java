@@ -30,7 +30,7 @@ final class FractionalAreaLatency implements Measure {
     @Override
     public Score score(Trace t, MeasureSettings settings) {
         Polarity polarity = settings.polarity();
-        double total = AreaMeasure.area(t, polarity);
+        double total = t.area(polarity);
         if (total == 0) {
             return Score.empty("no " + (polarity == Polarity.SIGNED ? "net" : polarity == Polarity.POSITIVE
                     ? "positive" : "negative") + " area in the window; value left empty");

@@ -44,9 +44,14 @@ final class LocalPeakMeasure implements Measure {
     }
 
     @Override
+    public int reachSamples(MeasureSettings settings, double rateHz) {
+        return settings.neighbourhoodSamples(rateHz);
+    }
+
+    @Override
     public Score score(Trace t, MeasureSettings settings) {
         int k = settings.neighbourhoodSamples(t.axis().rateHz());
-        int i = localPeakIndex(t, settings.polarity(), k);
+        int i = t.localPeakIndex(settings.polarity(), k);
         if (i >= 0) {
             return Score.of(latency ? t.timeMs(i) : t.values()[i]);
         }
@@ -57,34 +62,44 @@ final class LocalPeakMeasure implements Measure {
                 + (settings.polarity() == Polarity.NEGATIVE ? "minimum" : "maximum") + " is reported");
     }
 
-    /** The local peak's sample index, or −1 when no sample in the window qualifies. */
+    /**
+     * The local peak's sample index, or −1 when no sample in the window qualifies. The cheap
+     * tests (larger than the best so far and than both adjacent samples) come first; the side
+     * means are summed only for the few samples of an averaged wave that pass them.
+     */
     static int localPeakIndex(Trace t, Polarity polarity, int k) {
         double[] x = t.values();
-        int n = x.length;
-        int sign = polarity.sign();
-        int lo = Math.max(0, t.from() - k);
-        int hi = Math.min(n - 1, t.to() + k);
-        // prefix[j] = Σ sign·x[lo .. lo + j − 1]
-        double[] prefix = new double[hi - lo + 2];
-        for (int j = lo; j <= hi; j++) {
-            prefix[j - lo + 1] = prefix[j - lo] + sign * x[j];
-        }
+        int last = x.length - 1;
+        double sign = polarity.sign();
         int best = -1;
         double bestValue = Double.NEGATIVE_INFINITY;
-        for (int i = Math.max(1, t.from()); i <= Math.min(n - 2, t.to()); i++) {
+        for (int i = Math.max(1, t.from()), end = Math.min(last - 1, t.to()); i <= end; i++) {
             double v = sign * x[i];
-            if (v <= bestValue || v <= sign * x[i - 1] || v <= sign * x[i + 1]) {
-                continue;
-            }
-            int left = Math.max(lo, i - k);
-            int right = Math.min(hi, i + k);
-            double leftMean = (prefix[i - lo] - prefix[left - lo]) / (i - left);
-            double rightMean = (prefix[right - lo + 1] - prefix[i - lo + 1]) / (right - i);
-            if (v > leftMean && v > rightMean) {
+            if (v > bestValue && v > sign * x[i - 1] && v > sign * x[i + 1]
+                    && exceedsSideMeans(x, i, v, sign, k)) {
                 best = i;
                 bestValue = v;
             }
         }
         return best;
+    }
+
+    /** Whether sign·x[i] exceeds the mean of sign·x over k samples on each side (clipped to the data). */
+    private static boolean exceedsSideMeans(double[] x, int i, double v, double sign, int k) {
+        // the right side first: on a rising flank, where most candidates fail, it decides
+        int right = Math.min(x.length - 1, i + k);
+        double rightSum = 0;
+        for (int j = i + 1; j <= right; j++) {
+            rightSum += sign * x[j];
+        }
+        if (!(v * (right - i) > rightSum)) {
+            return false;
+        }
+        int left = Math.max(0, i - k);
+        double leftSum = 0;
+        for (int j = left; j < i; j++) {
+            leftSum += sign * x[j];
+        }
+        return v * (i - left) > leftSum;
     }
 }

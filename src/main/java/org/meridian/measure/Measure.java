@@ -25,6 +25,15 @@ public interface Measure {
     default void check(MeasureSettings settings) {
     }
 
+    /**
+     * How many samples beyond each end of the window the measure reads (0: only the window).
+     * The trace handed to {@link #score} holds at least this many samples on each side where
+     * the data has them, and its ends are the data's ends only where the data ends there.
+     */
+    default int reachSamples(MeasureSettings settings, double rateHz) {
+        return 0;
+    }
+
     /** Scores one wave in its window. Must not change the trace's values. */
     Score score(Trace trace, MeasureSettings settings);
 }

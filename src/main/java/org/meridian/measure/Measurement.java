@@ -72,10 +72,29 @@ public final class Measurement {
             for (int i = 0; i < n; i++) {
                 waves[i] = condition.forParticipant(study, included.get(i));
             }
-            TimeAxis axis = waves[0].axis();
-            List<TimeWindow.SampleRange> ranges = new ArrayList<>();
+            TimeAxis full = waves[0].axis();
+            List<TimeWindow.SampleRange> windowRanges = new ArrayList<>();
             for (TimeWindow w : request.windows()) {
-                ranges.add(w.resolve(axis));
+                windowRanges.add(w.resolve(full));
+            }
+            // only the samples the measures read are taken out: the windows and each measure's
+            // reach beyond them, on an axis that starts at the first of them
+            int reach = 0;
+            for (Measure m : request.measures()) {
+                reach = Math.max(reach, m.reachSamples(request.settings(), full.rateHz()));
+            }
+            int first = full.samples() - 1;
+            int last = 0;
+            for (TimeWindow.SampleRange r : windowRanges) {
+                first = Math.min(first, r.from());
+                last = Math.max(last, r.to());
+            }
+            first = Math.max(0, first - reach);
+            last = Math.min(full.samples() - 1, last + reach);
+            TimeAxis axis = new TimeAxis(full.timeMs(first), full.rateHz(), last - first + 1);
+            List<TimeWindow.SampleRange> ranges = new ArrayList<>();
+            for (TimeWindow.SampleRange r : windowRanges) {
+                ranges.add(new TimeWindow.SampleRange(r.from() - first, r.to() - first));
             }
             List<Region> regions = new ArrayList<>();
             if (request.channels().isEmpty()) {
@@ -93,41 +112,65 @@ public final class Measurement {
             for (Region region : regions) {
                 int[] idx = region.indices(waves[0]);
                 for (int i = 0; i < n; i++) {
-                    Region.meanInto(waves[i], idx, series[i]);
+                    Region.meanInto(waves[i], idx, first, series[i]);
                 }
                 double[] grand = request.grand() ? weightedMean(series, weights) : null;
                 double[][] leaveOneOut = request.jackknife() ? Jackknife.leaveOneOutAverages(series) : null;
                 for (int w = 0; w < ranges.size(); w++) {
                     TimeWindow window = request.windows().get(w);
                     TimeWindow.SampleRange r = ranges.get(w);
-                    for (Measure m : request.measures()) {
-                        String unit = m.unit(waves[0].unit());
-                        Cell cell = new Cell(region.label(), m, window, unit);
+                    Trace[] traces = new Trace[n];
+                    for (int i = 0; i < n; i++) {
+                        traces[i] = new Trace(series[i], axis, r.from(), r.to());
+                    }
+                    Trace[] subsamples = null;
+                    if (leaveOneOut != null) {
+                        subsamples = new Trace[n];
                         for (int i = 0; i < n; i++) {
-                            Score s = m.score(new Trace(series[i], axis, r.from(), r.to()), request.settings());
-                            add(cell, study.participants().get(included.get(i)), s, "");
+                            subsamples[i] = new Trace(leaveOneOut[i], axis, r.from(), r.to());
                         }
-                        if (leaveOneOut != null) {
-                            jackknife(cell, leaveOneOut, axis, r);
+                    }
+                    Trace grandTrace = grand == null ? null : new Trace(grand, axis, r.from(), r.to());
+                    // score participant by participant, so each trace stays in cache for every
+                    // measure; rows are then written measure by measure
+                    List<Measure> measures = request.measures();
+                    Score[][] scores = scoreAll(measures, traces);
+                    Score[][] subsampleScores = subsamples == null ? null : scoreAll(measures, subsamples);
+                    for (int m = 0; m < measures.size(); m++) {
+                        Measure measure = measures.get(m);
+                        Cell cell = new Cell(region.label(), measure, window, measure.unit(waves[0].unit()));
+                        for (int i = 0; i < n; i++) {
+                            add(cell, study.participants().get(included.get(i)), scores[i][m]);
                         }
-                        if (grand != null) {
-                            Score s = m.score(new Trace(grand, axis, r.from(), r.to()), request.settings());
-                            add(cell, MeasureTable.GRAND, s, "");
+                        if (subsampleScores != null) {
+                            jackknife(cell, subsampleScores, m);
+                        }
+                        if (grandTrace != null) {
+                            add(cell, MeasureTable.GRAND, measure.score(grandTrace, request.settings()));
                         }
                     }
                 }
             }
         }
 
-        private void jackknife(Cell cell, double[][] leaveOneOut, TimeAxis axis, TimeWindow.SampleRange r) {
-            int n = leaveOneOut.length;
+        private Score[][] scoreAll(List<Measure> measures, Trace[] traces) {
+            Score[][] out = new Score[traces.length][measures.size()];
+            for (int i = 0; i < traces.length; i++) {
+                for (int m = 0; m < measures.size(); m++) {
+                    out[i][m] = measures.get(m).score(traces[i], request.settings());
+                }
+            }
+            return out;
+        }
+
+        private void jackknife(Cell cell, Score[][] subsampleScores, int measure) {
+            int n = subsampleScores.length;
             double[] scores = new double[n];
             String qualifier = null;
             List<String> emptyFor = new ArrayList<>();
             List<String> qualifiedFor = new ArrayList<>();
             for (int i = 0; i < n; i++) {
-                Score s = cell.measure.score(new Trace(leaveOneOut[i], axis, r.from(), r.to()),
-                        request.settings());
+                Score s = subsampleScores[i][measure];
                 scores[i] = s.value();
                 String name = study.participants().get(included.get(i));
                 if (s.isEmpty()) {
@@ -137,12 +180,11 @@ public final class Measurement {
                     qualifiedFor.add(name);
                 }
             }
-            String jackknifeName = MeasureTable.JACKKNIFE_SUFFIX;
             if (!emptyFor.isEmpty()) {
                 warn(cell, "jackknife", "the average without " + list(emptyFor) + " has no value,"
                         + " so no retrieved score can be formed; values left empty");
                 for (int i = 0; i < n; i++) {
-                    row(cell, study.participants().get(included.get(i)), null, jackknifeName, Double.NaN);
+                    row(cell, study.participants().get(included.get(i)), null, true, Double.NaN);
                 }
                 return;
             }
@@ -152,19 +194,21 @@ public final class Measurement {
             }
             double[] retrieved = Jackknife.retrieve(scores);
             for (int i = 0; i < n; i++) {
-                row(cell, study.participants().get(included.get(i)), qualifier, jackknifeName, retrieved[i]);
+                row(cell, study.participants().get(included.get(i)), qualifier, true, retrieved[i]);
             }
         }
 
-        private void add(Cell cell, String participant, Score s, String suffix) {
+        private void add(Cell cell, String participant, Score s) {
             if (s.warning() != null) {
                 warn(cell, participant, s.warning());
             }
-            row(cell, participant, s.qualifier(), suffix, s.value());
+            row(cell, participant, s.qualifier(), false, s.value());
         }
 
-        private void row(Cell cell, String participant, String qualifier, String suffix, double value) {
-            String measure = cell.measure.name() + (qualifier == null ? "" : " (" + qualifier + ")") + suffix;
+        private void row(Cell cell, String participant, String qualifier, boolean jackknife, double value) {
+            String measure = qualifier == null ? (jackknife ? cell.jackknifeName : cell.measure.name())
+                    : cell.measure.name() + " (" + qualifier + ")"
+                            + (jackknife ? MeasureTable.JACKKNIFE_SUFFIX : "");
             rows.add(new MeasureTable.Row(participant, condition.name(), cell.channel, measure,
                     cell.window, value, cell.unit));
         }
@@ -196,6 +240,20 @@ public final class Measurement {
         }
     }
 
-    private record Cell(String channel, Measure measure, TimeWindow window, String unit) {
+    /** What the rows of one channel, measure and window share. */
+    private static final class Cell {
+        final String channel;
+        final Measure measure;
+        final TimeWindow window;
+        final String unit;
+        final String jackknifeName;
+
+        Cell(String channel, Measure measure, TimeWindow window, String unit) {
+            this.channel = channel;
+            this.measure = measure;
+            this.window = window;
+            this.unit = unit;
+            this.jackknifeName = measure.name() + MeasureTable.JACKKNIFE_SUFFIX;
+        }
     }
 }

@@ -69,16 +69,23 @@ public record Region(String label, List<String> channels) {
         return idx;
     }
 
-    /** The region's mean wave into {@code dst} (length = samples), given its channel indices. */
-    public static void meanInto(Waveforms w, int[] indices, double[] dst) {
-        w.channelInto(indices[0], dst);
+    /**
+     * The region's mean wave over samples {@code first .. first + dst.length − 1} into
+     * {@code dst}, given its channel indices.
+     */
+    public static void meanInto(Waveforms w, int[] indices, int first, double[] dst) {
+        int n = dst.length;
+        int c0 = indices[0];
+        for (int s = 0; s < n; s++) {
+            dst[s] = w.value(c0, first + s);
+        }
         if (indices.length == 1) {
             return;
         }
-        int n = w.sampleCount();
         for (int k = 1; k < indices.length; k++) {
+            int c = indices[k];
             for (int s = 0; s < n; s++) {
-                dst[s] += w.value(indices[k], s);
+                dst[s] += w.value(c, first + s);
             }
         }
         for (int s = 0; s < n; s++) {

@@ -78,6 +78,43 @@ public final class ConditionExpression implements ConditionWave {
         return parse(text, study.conditions());
     }
 
+    /**
+     * Reads a comma-separated list of expressions, e.g. {@code rare, common, rare - common};
+     * commas inside single quotes or parentheses do not split.
+     *
+     * @throws ExpressionSyntaxException for the first expression that cannot be read
+     */
+    public static List<ConditionExpression> parseList(String text, List<String> conditionNames) {
+        List<ConditionExpression> out = new ArrayList<>();
+        for (String part : splitList(text)) {
+            out.add(parse(part, conditionNames));
+        }
+        return out;
+    }
+
+    /** Splits at commas outside single quotes and parentheses; parts are trimmed. */
+    public static List<String> splitList(String text) {
+        List<String> parts = new ArrayList<>();
+        boolean quoted = false;
+        int depth = 0;
+        int start = 0;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\'') {
+                quoted = !quoted;
+            } else if (!quoted && c == '(') {
+                depth++;
+            } else if (!quoted && c == ')') {
+                depth = Math.max(0, depth - 1);
+            } else if (!quoted && depth == 0 && c == ',') {
+                parts.add(text.substring(start, i).strip());
+                start = i + 1;
+            }
+        }
+        parts.add(text.substring(start).strip());
+        return parts;
+    }
+
     /** One loaded condition on its own. */
     public static ConditionExpression condition(String name) {
         return new ConditionExpression(null, List.of(new Term(1, name)));
