@@ -41,7 +41,12 @@ final class FractionalAreaLatency implements Measure {
         double dt = t.stepMs();
         double running = 0;
         for (int i = t.from(); i < t.to(); i++) {
-            double next = running + direction * SegmentArea.of(x[i], x[i + 1], dt, polarity);
+            double a = x[i];
+            double b = x[i + 1];
+            double piece = polarity == Polarity.SIGNED ? SegmentArea.signed(a, b, dt)
+                    : polarity == Polarity.POSITIVE ? SegmentArea.positive(a, b, dt)
+                    : SegmentArea.signed(a, b, dt) - SegmentArea.positive(a, b, dt);
+            double next = running + direction * piece;
             if (next >= target) {
                 double share = next == running ? 0 : (target - running) / (next - running);
                 return Score.of(t.timeMs(i) + Math.max(0, share) * dt);

@@ -62,26 +62,57 @@ final class LocalPeakMeasure implements Measure {
                 + (settings.polarity() == Polarity.NEGATIVE ? "minimum" : "maximum") + " is reported");
     }
 
+    /** After this many candidates the side sums come from running totals instead of loops. */
+    private static final int DIRECT_CHECKS = 4;
+
     /**
      * The local peak's sample index, or −1 when no sample in the window qualifies. The cheap
-     * tests (larger than the best so far and than both adjacent samples) come first; the side
-     * means are summed only for the few samples of an averaged wave that pass them.
+     * tests (larger than the best so far and than both adjacent samples) come first. The side
+     * means of the few samples that pass them are summed directly; once a jagged wave has
+     * produced more candidates than that, running totals over the window and its neighbourhood
+     * are built and each side mean costs one subtraction.
      */
     static int localPeakIndex(Trace t, Polarity polarity, int k) {
         double[] x = t.values();
         int last = x.length - 1;
         double sign = polarity.sign();
+        int lo = Math.max(0, t.from() - k);
+        double[] prefix = null;
+        int checks = 0;
         int best = -1;
         double bestValue = Double.NEGATIVE_INFINITY;
         for (int i = Math.max(1, t.from()), end = Math.min(last - 1, t.to()); i <= end; i++) {
             double v = sign * x[i];
-            if (v > bestValue && v > sign * x[i - 1] && v > sign * x[i + 1]
-                    && exceedsSideMeans(x, i, v, sign, k)) {
+            if (!(v > bestValue && v > sign * x[i - 1] && v > sign * x[i + 1])) {
+                continue;
+            }
+            int left = Math.max(0, i - k);
+            int right = Math.min(last, i + k);
+            boolean qualifies;
+            if (prefix == null && ++checks > DIRECT_CHECKS) {
+                prefix = runningTotals(x, sign, lo, Math.min(last, t.to() + k));
+            }
+            if (prefix != null) {
+                // prefix[j] = Σ sign·x over lo .. lo + j − 1
+                qualifies = v * (right - i) > prefix[right - lo + 1] - prefix[i - lo + 1]
+                        && v * (i - left) > prefix[i - lo] - prefix[left - lo];
+            } else {
+                qualifies = exceedsSideMeans(x, i, v, sign, k);
+            }
+            if (qualifies) {
                 best = i;
                 bestValue = v;
             }
         }
         return best;
+    }
+
+    private static double[] runningTotals(double[] x, double sign, int lo, int hi) {
+        double[] prefix = new double[hi - lo + 2];
+        for (int j = lo; j <= hi; j++) {
+            prefix[j - lo + 1] = prefix[j - lo] + sign * x[j];
+        }
+        return prefix;
     }
 
     /** Whether sign·x[i] exceeds the mean of sign·x over k samples on each side (clipped to the data). */

@@ -109,13 +109,16 @@ public final class Measurement {
                         "the jackknife needs at least two participants");
             }
             double[][] series = new double[n][axis.samples()];
+            double[][] leaveOneOut = request.jackknife() ? new double[n][axis.samples()] : null;
             for (Region region : regions) {
                 int[] idx = region.indices(waves[0]);
                 for (int i = 0; i < n; i++) {
                     Region.meanInto(waves[i], idx, first, series[i]);
                 }
                 double[] grand = request.grand() ? weightedMean(series, weights) : null;
-                double[][] leaveOneOut = request.jackknife() ? Jackknife.leaveOneOutAverages(series) : null;
+                if (leaveOneOut != null) {
+                    Jackknife.leaveOneOutAveragesInto(series, leaveOneOut);
+                }
                 for (int w = 0; w < ranges.size(); w++) {
                     TimeWindow window = request.windows().get(w);
                     TimeWindow.SampleRange r = ranges.get(w);

@@ -23,6 +23,13 @@ public final class Jackknife {
      * {@code series} but row i. All rows must have the same length; needs N ≥ 2.
      */
     public static double[][] leaveOneOutAverages(double[][] series) {
+        double[][] out = new double[series.length][series.length == 0 ? 0 : series[0].length];
+        leaveOneOutAveragesInto(series, out);
+        return out;
+    }
+
+    /** As {@link #leaveOneOutAverages}, into {@code out} (same shape as {@code series}). */
+    public static void leaveOneOutAveragesInto(double[][] series, double[][] out) {
         int n = series.length;
         if (n < 2) {
             throw new BadInputException("the jackknife needs at least two participants");
@@ -37,13 +44,11 @@ public final class Jackknife {
                 sum[s] += row[s];
             }
         }
-        double[][] out = new double[n][len];
         for (int i = 0; i < n; i++) {
             for (int s = 0; s < len; s++) {
                 out[i][s] = (sum[s] - series[i][s]) / (n - 1);
             }
         }
-        return out;
     }
 
     /** Smulders (2010): x_i = N · J̄ − (N − 1) · J_i from the leave-one-out scores J_i. */
