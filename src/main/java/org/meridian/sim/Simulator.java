@@ -23,34 +23,29 @@ import org.meridian.montage.ChannelPositions;
  * follows {@link NoiseModel}.
  *
  * <p>Everything random comes from {@link SeededStream}s derived from the seed and fixed keys:
- * (trials, participant), (source, participant, source index), (noise, participant, condition).
- * A participant's draws therefore do not depend on how many participants the study has, and the
- * same seed with {@link NoiseModel#NONE} gives the same participants without noise.
+ * (trials, participant), (source, participant, hash of the source's name), (noise, participant,
+ * condition). A participant's draws therefore do not depend on how many participants the study
+ * has, a source's draws not on which other sources the scenario holds, and the same seed with
+ * {@link NoiseModel#NONE} gives the same participants without noise — so a validation can compare
+ * one source with two on exactly the same participants.
  *
- * <p>Work done once: the lead fields of the brain-noise dipoles and the noise mixing matrix, in
- * the constructor; the lead field of each participant's source position, once per simulation
- * and reused for every condition and sample. A {@code Simulator} may be reused for any number of
- * seeds; {@link #simulate} is safe to call from several threads at once.
+ * <p>Work done once: the background's spatial covariance and its square root
+ * ({@link BackgroundNoise}), in the constructor; the lead field of each participant's source
+ * position, once per simulation, reused for every condition and sample. A {@code Simulator}
+ * may be reused for any number of seeds; {@link #simulate} is safe to call from several
+ * threads at once.
  */
 public final class Simulator {
     private static final long TRIALS_KEY = 1;
     private static final long SOURCE_KEY = 2;
     private static final long NOISE_KEY = 3;
-    /** Points of the Fibonacci lattice from which the brain-noise dipoles are taken. */
-    private static final int NOISE_LATTICE = 64;
-    /** Brain-noise dipoles sit at 70 % of the radius, on the part of the shell above z = −0.3. */
-    private static final double NOISE_ECCENTRICITY = 0.7;
-    private static final double NOISE_LOWEST_Z = -0.3;
     private static final int POSITION_TRIES = 1000;
 
     private final Scenario scenario;
     private final int channels;
     private final int samples;
     private final double[] times;
-    /** Average-referenced brain-noise mixing, channel-major: channels × noise series. */
-    private final double[] brainMixing;
-    private final int brainSeries;
-    private final double sensorScale;
+    private final BackgroundNoise background;
     private final Montage studyMontage;
     private final List<ChannelPlacement> placements;
 
@@ -62,12 +57,7 @@ public final class Simulator {
         for (int s = 0; s < samples; s++) {
             times[s] = scenario.axis().timeMs(s);
         }
-        List<Vector3> noisePositions = brainNoisePositions(scenario.head().radiusM());
-        this.brainSeries = 3 * noisePositions.size();
-        this.brainMixing = brainMixing(scenario, noisePositions);
-        NoiseModel noise = scenario.noise();
-        double rms = noise.singleTrialRmsUv();
-        this.sensorScale = rms * StrictMath.sqrt(noise.sensorFraction() / (1 - 1.0 / channels));
+        this.background = scenario.noise().silent() ? null : new BackgroundNoise(scenario);
         ChannelPositions.Resolution standard = ChannelPositions.resolve(scenario.montage().labels(), null);
         if (sameDirections(standard.montage(), scenario.montage())) {
             this.studyMontage = standard.montage();
@@ -93,9 +83,7 @@ public final class Simulator {
     public Simulation simulate(long seed) {
         List<ConditionSpec> conditions = scenario.conditions();
         List<Source> sources = scenario.sources();
-        PowerLawNoise generator = scenario.noise().silent() ? null : new PowerLawNoise(samples,
-                scenario.axis().rateHz(), scenario.noise().exponent(), scenario.noise().lowHz());
-        double[] brainBuffer = generator == null ? null : new double[brainSeries * samples];
+        BackgroundNoise.Workspace workspace = background == null ? null : background.workspace();
         Study.Builder study = Study.builder(scenario.name()).montage(studyMontage).placements(placements);
         List<GroundTruth.ParticipantTruth> truths = new ArrayList<>();
         String format = "p%0" + Math.max(2, String.valueOf(scenario.participants()).length()) + "d";
@@ -114,9 +102,9 @@ public final class Simulator {
             for (int c = 0; c < conditions.size(); c++) {
                 double[] v = new double[channels * samples];
                 addSources(v, sources, draws, maps, conditions.get(c).name());
-                if (generator != null) {
-                    addNoise(v, generator, brainBuffer, SeededStream.derive(seed, NOISE_KEY, p, c),
-                            1 / StrictMath.sqrt(trials.get(c)));
+                if (background != null) {
+                    background.addTo(v, SeededStream.derive(seed, NOISE_KEY, p, c), trials.get(c),
+                            workspace);
                 }
                 study.add(participant, conditions.get(c).name(),
                         Waveforms.wrap(scenario.montage().labels(), scenario.axis(), Unit.MICROVOLT,
@@ -182,29 +170,6 @@ public final class Simulator {
         }
     }
 
-    private void addNoise(double[] v, PowerLawNoise generator, double[] buffer, SeededStream r,
-            double trialScale) {
-        generator.reset();
-        java.util.Arrays.fill(buffer, 0);
-        for (int k = 0; k < brainSeries; k++) {
-            generator.addSeries(r, 1, buffer, k * samples);
-        }
-        for (int ch = 0; ch < channels; ch++) {
-            int off = ch * samples;
-            int mixOff = ch * brainSeries;
-            for (int k = 0; k < brainSeries; k++) {
-                double w = brainMixing[mixOff + k] * trialScale;
-                int bOff = k * samples;
-                for (int t = 0; t < samples; t++) {
-                    v[off + t] += w * buffer[bOff + t];
-                }
-            }
-        }
-        for (int ch = 0; ch < channels; ch++) {
-            generator.addSeries(r, sensorScale * trialScale, v, ch * samples);
-        }
-    }
-
     /** Subtracts the mean over channels at every sample and narrows to float. */
     private float[] averageReferenced(double[] v) {
         float[] out = new float[v.length];
@@ -217,66 +182,6 @@ public final class Simulator {
             for (int ch = 0; ch < channels; ch++) {
                 out[ch * samples + t] = (float) (v[ch * samples + t] - mean);
             }
-        }
-        return out;
-    }
-
-    /**
-     * Average-referenced lead fields of the brain-noise dipoles (x, y, z moments), scaled so
-     * that unit-variance series give the brain part of the single-trial RMS.
-     */
-    private static double[] brainMixing(Scenario scenario, List<Vector3> positions) {
-        int channels = scenario.montage().size();
-        int series = 3 * positions.size();
-        double[] mix = new double[channels * series];
-        for (int k = 0; k < positions.size(); k++) {
-            LeadField lf = scenario.head().leadField(positions.get(k), scenario.montage(),
-                    "a brain-noise dipole");
-            for (int ch = 0; ch < channels; ch++) {
-                Vector3 g = lf.gain(ch);
-                mix[ch * series + 3 * k] = g.x();
-                mix[ch * series + 3 * k + 1] = g.y();
-                mix[ch * series + 3 * k + 2] = g.z();
-            }
-        }
-        double sumSquares = 0;
-        for (int k = 0; k < series; k++) {
-            double mean = 0;
-            for (int ch = 0; ch < channels; ch++) {
-                mean += mix[ch * series + k];
-            }
-            mean /= channels;
-            for (int ch = 0; ch < channels; ch++) {
-                mix[ch * series + k] -= mean;
-                sumSquares += mix[ch * series + k] * mix[ch * series + k];
-            }
-        }
-        NoiseModel noise = scenario.noise();
-        double target = noise.singleTrialRmsUv() * noise.singleTrialRmsUv() * (1 - noise.sensorFraction());
-        double scale = sumSquares > 0 ? StrictMath.sqrt(target * channels / sumSquares) : 0;
-        for (int i = 0; i < mix.length; i++) {
-            mix[i] *= scale;
-        }
-        return mix;
-    }
-
-    /**
-     * The brain-noise dipole positions: the points of a 64-point Fibonacci lattice on the unit
-     * sphere (González, 2010, "Measurement of areas on a sphere using Fibonacci and latitude–
-     * longitude lattices") with z ≥ −0.3, scaled to 70 % of the radius.
-     */
-    static List<Vector3> brainNoisePositions(double radiusM) {
-        List<Vector3> out = new ArrayList<>();
-        double golden = (1 + StrictMath.sqrt(5)) / 2;
-        for (int i = 0; i < NOISE_LATTICE; i++) {
-            double z = 1 - (2 * i + 1.0) / NOISE_LATTICE;
-            if (z < NOISE_LOWEST_Z) {
-                continue;
-            }
-            double rho = StrictMath.sqrt(1 - z * z);
-            double phi = 2 * StrictMath.PI * i / golden;
-            out.add(new Vector3(rho * StrictMath.cos(phi), rho * StrictMath.sin(phi), z)
-                    .times(NOISE_ECCENTRICITY * radiusM));
         }
         return out;
     }

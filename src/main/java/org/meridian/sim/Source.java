@@ -56,6 +56,11 @@ public record Source(String name, Vector3 positionM, Vector3 orientation,
         return new Source(name, newPositionM, orientation, components, gains, variability);
     }
 
+    /** The same source with other gains per condition. */
+    public Source withGains(Map<String, Double> newGains) {
+        return new Source(name, positionM, orientation, components, newGains, variability);
+    }
+
     /** The same source with another spread between participants. */
     public Source withVariability(Variability v) {
         return new Source(name, positionM, orientation, components, gains, v);

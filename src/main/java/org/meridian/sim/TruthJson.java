@@ -39,7 +39,7 @@ public final class TruthJson {
                 + ", \"spectral_exponent\": " + num(n.exponent(), 4) + ", \"flat_below_hz\": "
                 + num(n.lowHz(), 4) + ", \"sensor_fraction\": " + num(n.sensorFraction(), 4)
                 + ", \"brain_noise_dipoles\": "
-                + Simulator.brainNoisePositions(s.head().radiusM()).size() + "}");
+                + BackgroundNoise.brainDipolePositions(s.head().radiusM()).size() + "}");
         indent(b, 1).append("\"conditions\": [\n");
         for (int i = 0; i < s.conditions().size(); i++) {
             ConditionSpec c = s.conditions().get(i);
