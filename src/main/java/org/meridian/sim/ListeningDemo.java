@@ -77,12 +77,12 @@ public final class ListeningDemo {
     }
 
     static List<Source> sources() {
-        List<SourceComponent> auditory = List.of(
+        List<TimeCourse> auditory = List.of(
                 new SourceComponent(30, 55, 50, 8),
                 new SourceComponent(60, 100, 110, -30),
                 new SourceComponent(130, 185, 140, 22));
         Map<String, Double> everyTone = Map.of(FREQUENT, 1.0, RARE, 1.15);
-        List<SourceComponent> mismatch = List.of(new SourceComponent(100, 165, 150, -20));
+        List<TimeCourse> mismatch = List.of(new SourceComponent(100, 165, 150, -20));
         return List.of(
                 new Source("auditory-left", new Vector3(-0.047, -0.008, 0.02),
                         new Vector3(0.1, 0.25, 1), auditory, everyTone, SPREAD),

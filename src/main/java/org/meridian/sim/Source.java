@@ -8,12 +8,12 @@ import java.util.Map;
 /**
  * A current dipole of a scenario: a name, its position in the head frame (metres from the
  * sphere's centre), its orientation (normalised here), its time course as a sum of
- * {@link SourceComponent}s, a gain per condition (a condition not listed has gain 0: the source
+ * {@link TimeCourse}s (such as {@link SourceComponent}), a gain per condition (a condition not listed has gain 0: the source
  * is silent there) and its spread between participants. Its moment at time t in condition c is
  * gain(c) · Σ components(t) along the orientation. Immutable.
  */
 public record Source(String name, Vector3 positionM, Vector3 orientation,
-        List<SourceComponent> components, Map<String, Double> gains, Variability variability) {
+        List<TimeCourse> components, Map<String, Double> gains, Variability variability) {
 
     public Source {
         if (name == null || name.isBlank()) {
@@ -45,7 +45,7 @@ public record Source(String name, Vector3 positionM, Vector3 orientation,
     /** The nominal moment along the orientation at {@code timeMs} in nA·m, before the gain. */
     public double momentAt(double timeMs) {
         double sum = 0;
-        for (SourceComponent c : components) {
+        for (TimeCourse c : components) {
             sum += c.valueAt(timeMs);
         }
         return sum;

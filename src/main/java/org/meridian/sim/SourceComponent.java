@@ -1,6 +1,8 @@
 package org.meridian.sim;
 
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * One smooth deflection of a source's moment over time: zero before its onset, rising along a
@@ -14,7 +16,8 @@ import java.util.Locale;
  * fall, common practice for simulated components). Times in ms, amplitude in nA·m along the
  * source's orientation (negative: the moment points the other way). Immutable.
  */
-public record SourceComponent(double onsetMs, double peakMs, double widthMs, double amplitudeNAm) {
+public record SourceComponent(double onsetMs, double peakMs, double widthMs, double amplitudeNAm)
+        implements TimeCourse {
 
     public SourceComponent {
         if (!Double.isFinite(onsetMs) || !Double.isFinite(peakMs) || !Double.isFinite(widthMs)
@@ -32,7 +35,23 @@ public record SourceComponent(double onsetMs, double peakMs, double widthMs, dou
         return onsetMs + widthMs;
     }
 
+    @Override
+    public String kind() {
+        return "raised-cosine";
+    }
+
+    @Override
+    public Map<String, Double> parameters() {
+        Map<String, Double> p = new LinkedHashMap<>();
+        p.put("onset_ms", onsetMs);
+        p.put("peak_ms", peakMs);
+        p.put("width_ms", widthMs);
+        p.put("amplitude_nam", amplitudeNAm);
+        return p;
+    }
+
     /** The moment in nA·m at time {@code timeMs}. */
+    @Override
     public double valueAt(double timeMs) {
         if (timeMs <= onsetMs || timeMs >= endMs()) {
             return 0;

@@ -3,6 +3,7 @@ package org.meridian.sim;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Writes a {@link GroundTruth} as JSON text ({@code truth.json} beside a simulated study): the
@@ -72,12 +73,13 @@ public final class TruthJson {
         field(b, 3, "orientation", vector(s.orientation(), 4));
         indent(b, 3).append("\"components\": [");
         for (int k = 0; k < s.components().size(); k++) {
-            SourceComponent c = s.components().get(k);
+            TimeCourse c = s.components().get(k);
             b.append(k == 0 ? "\n" : ",\n");
-            indent(b, 4).append("{\"onset_ms\": ").append(num(c.onsetMs(), 3))
-                    .append(", \"peak_ms\": ").append(num(c.peakMs(), 3))
-                    .append(", \"width_ms\": ").append(num(c.widthMs(), 3))
-                    .append(", \"amplitude_nam\": ").append(num(c.amplitudeNAm(), 4)).append('}');
+            indent(b, 4).append("{\"kind\": ").append(str(c.kind()));
+            for (Map.Entry<String, Double> e : c.parameters().entrySet()) {
+                b.append(", ").append(str(e.getKey())).append(": ").append(num(e.getValue(), 4));
+            }
+            b.append('}');
         }
         b.append("\n");
         indent(b, 3).append("],\n");
