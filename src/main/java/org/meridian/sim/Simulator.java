@@ -2,6 +2,7 @@ package org.meridian.sim;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.meridian.core.ChannelPlacement;
 import org.meridian.core.Electrode;
 import org.meridian.core.Montage;
@@ -88,7 +89,7 @@ public final class Simulator {
         List<GroundTruth.ParticipantTruth> truths = new ArrayList<>();
         String format = "p%0" + Math.max(2, String.valueOf(scenario.participants()).length()) + "d";
         for (int p = 0; p < scenario.participants(); p++) {
-            String participant = String.format(format, p + 1);
+            String participant = String.format(Locale.ROOT, format, p + 1);
             List<Integer> trials = drawTrials(seed, p, conditions);
             List<GroundTruth.SourceDraw> draws = new ArrayList<>();
             double[][] maps = new double[sources.size()][];

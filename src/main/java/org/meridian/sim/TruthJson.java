@@ -175,7 +175,7 @@ public final class TruthJson {
                 case '\t' -> sb.append("\\t");
                 default -> {
                     if (ch < 0x20) {
-                        sb.append(String.format("\\u%04x", (int) ch));
+                        sb.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) ch));
                     } else {
                         sb.append(ch);
                     }
