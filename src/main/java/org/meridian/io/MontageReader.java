@@ -27,40 +27,46 @@ public final class MontageReader {
     private MontageReader() {
     }
 
-    /** Whether a header names a montage file (its first column is {@code label} or {@code name}). */
+    /** Whether a header names a montage file: a label column and coordinate columns. */
     static boolean isMontageHeader(Preamble pre) {
-        String first = pre.firstColumnKey();
-        return (first.equals("label") || first.equals("name"))
-                && ((pre.indexOf("x") > 0 && pre.indexOf("y") > 0 && pre.indexOf("z") > 0)
-                || (pre.indexOf("theta") > 0 && pre.indexOf("phi") > 0));
+        return labelColumn(pre) >= 0
+                && ((pre.indexOf("x") >= 0 && pre.indexOf("y") >= 0 && pre.indexOf("z") >= 0)
+                || (pre.indexOf("theta") >= 0 && pre.indexOf("phi") >= 0));
+    }
+
+    /** The column named {@code label} or, as in the imaging community's table, {@code name}. */
+    private static int labelColumn(Preamble pre) {
+        int i = pre.indexOf("label");
+        return i >= 0 ? i : pre.indexOf("name");
     }
 
     public static Montage read(Path file) {
         String name = file.toString();
         try (LineScanner sc = new LineScanner(name, TextInput.open(file), () -> false)) {
             Preamble pre = Preamble.read(sc);
-            String first = pre.firstColumnKey();
-            if (!first.equals("label") && !first.equals("name")) {
-                throw sc.error(1, "the header starts with " + LineScanner.quote(pre.columns().get(0))
-                        + "; a montage file has the columns label x y z or label theta phi");
+            int il = labelColumn(pre);
+            if (il < 0) {
+                throw sc.error(0, "a montage file needs a label (or name) column; this header has "
+                        + String.join(", ", pre.columns()));
             }
             int ix = pre.indexOf("x");
             int iy = pre.indexOf("y");
             int iz = pre.indexOf("z");
-            if (ix > 0 && iy > 0 && iz > 0) {
-                return measured(sc, pre, new int[] {ix, iy, iz}, name);
+            if (ix >= 0 && iy >= 0 && iz >= 0) {
+                return measured(sc, pre, il, new int[] {ix, iy, iz}, name);
             }
             int it = pre.indexOf("theta");
             int ip = pre.indexOf("phi");
-            if (it > 0 && ip > 0) {
-                return spherical(sc, pre, it, ip, name);
+            if (it >= 0 && ip >= 0) {
+                return spherical(sc, pre, il, it, ip, name);
             }
             throw sc.error(0, "a montage file needs the columns x, y and z, or theta and phi;"
                     + " this header has " + String.join(", ", pre.columns()));
         }
     }
 
-    private static Montage measured(LineScanner sc, Preamble pre, int[] xyz, String name) {
+    private static Montage measured(LineScanner sc, Preamble pre, int il, int[] xyz,
+            String name) {
         List<String> labels = new ArrayList<>();
         List<double[]> points = new ArrayList<>();
         Map<String, Integer> labelLines = new HashMap<>();
@@ -71,7 +77,7 @@ public final class MontageReader {
             if (!row(sc, width)) {
                 continue;
             }
-            String label = label(sc, labelLines);
+            String label = label(sc, il, labelLines);
             if (isMissing(sc, xyz[0]) || isMissing(sc, xyz[1]) || isMissing(sc, xyz[2])) {
                 continue;
             }
@@ -92,7 +98,8 @@ public final class MontageReader {
         return SphereFit.montageFromMeasured(labels, points.toArray(new double[0][]), name);
     }
 
-    private static Montage spherical(LineScanner sc, Preamble pre, int it, int ip, String name) {
+    private static Montage spherical(LineScanner sc, Preamble pre, int il, int it, int ip,
+            String name) {
         List<Electrode> electrodes = new ArrayList<>();
         Map<String, Integer> labelLines = new HashMap<>();
         int width = pre.columns().size();
@@ -100,7 +107,7 @@ public final class MontageReader {
             if (!row(sc, width)) {
                 continue;
             }
-            String label = label(sc, labelLines);
+            String label = label(sc, il, labelLines);
             double theta = Math.toRadians(sc.number(it));
             double phi = Math.toRadians(sc.number(ip));
             electrodes.add(new Electrode(label, Math.sin(theta) * Math.cos(phi),
@@ -123,14 +130,14 @@ public final class MontageReader {
         return true;
     }
 
-    private static String label(LineScanner sc, Map<String, Integer> labelLines) {
-        String label = sc.text(0);
+    private static String label(LineScanner sc, int cell, Map<String, Integer> labelLines) {
+        String label = sc.text(cell);
         if (label.isEmpty()) {
-            throw sc.error(1, "empty electrode label");
+            throw sc.error(cell + 1, "empty electrode label");
         }
         Integer previous = labelLines.put(Montage.key(label), sc.line());
         if (previous != null) {
-            throw sc.error(1, "electrode " + label + " appears twice (also on line " + previous + ")");
+            throw sc.error(cell + 1, "electrode " + label + " appears twice (also on line " + previous + ")");
         }
         return label;
     }

@@ -71,6 +71,14 @@ record Preamble(int headerLine, List<String> columns, Unit.Scaled unit, int unit
         return best;
     }
 
+    /** Refuses a header of one column: the delimiter is then none of ours. */
+    void requireColumns(LineScanner sc) {
+        if (columns.size() < 2) {
+            throw sc.error(0, "the header has a single column; separate the columns by tabs,"
+                    + " commas or semicolons");
+        }
+    }
+
     /** The first header cell in lower case, which tells the kind of table. */
     String firstColumnKey() {
         return key(columns.get(0));

@@ -9,12 +9,15 @@ import org.meridian.core.TimeAxis;
  * uniform: every step between consecutive samples must lie within 0.1 % of the median step
  * (DESIGN §4). The rate is taken from the whole span, 1000·(n − 1)/(t_last − t_first) Hz, which
  * is far less affected by times rounded in the file than any single step; a rate within 1e-6
- * of a whole number of hertz is taken as that number.
+ * of a whole number of hertz is taken as that number. A first time within 0.1 % of a step of a
+ * whole number of steps from 0 ms is taken as exactly that (an epoch sampled in step with its
+ * event at 0 ms, written with rounded times), so reading and writing again changes nothing.
  */
 final class Sampling {
     /** Allowed deviation of any step from the median step. */
     static final double STEP_TOLERANCE = 1e-3;
     private static final double WHOLE_HZ_TOLERANCE = 1e-6;
+    private static final double ON_GRID_TOLERANCE = STEP_TOLERANCE;
     /** Times are kept to this many ms, hiding the binary noise of converting seconds. */
     private static final double TIME_GRID_MS = 1e-9;
 
@@ -56,13 +59,16 @@ final class Sampling {
                         + " step is " + ms(median) + " ms (allowed: within 0.1 %)");
             }
         }
-        double first = Math.rint(timesMs[0] / TIME_GRID_MS) * TIME_GRID_MS;
         double rate = 1000.0 * (n - 1) / (timesMs[n - 1] - timesMs[0]);
         double whole = Math.rint(rate);
         if (Math.abs(rate - whole) <= WHOLE_HZ_TOLERANCE * rate) {
             rate = whole;
         }
-        return new TimeAxis(first, rate, n);
+        double step = 1000.0 / rate;
+        double k = Math.rint(timesMs[0] / step);
+        double first = Math.abs(timesMs[0] - k * step) <= ON_GRID_TOLERANCE * step
+                ? k * 1000.0 / rate : Math.rint(timesMs[0] / TIME_GRID_MS) * TIME_GRID_MS;
+        return new TimeAxis(first + 0.0, rate, n);
     }
 
     /** A time in ms for messages: up to four decimals, no trailing zeros. */

@@ -97,6 +97,7 @@ public final class StudyLoader {
         Path file = studyFile(path);
         try (LineScanner sc = new LineScanner(file.toString(), TextInput.open(file), () -> false)) {
             Preamble pre = Preamble.read(sc);
+            pre.requireColumns(sc);
             if (ManifestReader.isManifestHeader(pre)) {
                 return Kind.MANIFEST;
             }

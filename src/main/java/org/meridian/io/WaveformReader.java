@@ -38,10 +38,7 @@ public final class WaveformReader {
         try (LineScanner sc = new LineScanner(file.toString(), TextInput.open(file), cancelled)) {
             Preamble pre = Preamble.read(sc);
             String first = pre.firstColumnKey();
-            if (pre.columns().size() < 2) {
-                throw sc.error(0, "the header has a single column; separate the columns by tabs,"
-                        + " commas or semicolons");
-            }
+            pre.requireColumns(sc);
             return switch (first) {
                 case "time_ms" -> samplesAsRows(sc, pre, 1.0);
                 case "time_s" -> samplesAsRows(sc, pre, 1000.0);
