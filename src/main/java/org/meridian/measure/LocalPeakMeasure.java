@@ -64,6 +64,8 @@ final class LocalPeakMeasure implements Measure {
 
     /** After this many candidates the side sums come from running totals instead of loops. */
     private static final int DIRECT_CHECKS = 4;
+    /** Running totals are kept in one buffer per thread, so scoring allocates nothing. */
+    private static final ThreadLocal<double[]> TOTALS = ThreadLocal.withInitial(() -> new double[0]);
 
     /**
      * The local peak's sample index, or −1 when no sample in the window qualifies. The cheap
@@ -108,7 +110,12 @@ final class LocalPeakMeasure implements Measure {
     }
 
     private static double[] runningTotals(double[] x, double sign, int lo, int hi) {
-        double[] prefix = new double[hi - lo + 2];
+        double[] prefix = TOTALS.get();
+        if (prefix.length < hi - lo + 2) {
+            prefix = new double[hi - lo + 2];
+            TOTALS.set(prefix);
+        }
+        prefix[0] = 0;
         for (int j = lo; j <= hi; j++) {
             prefix[j - lo + 1] = prefix[j - lo] + sign * x[j];
         }
