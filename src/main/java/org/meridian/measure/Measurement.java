@@ -64,9 +64,11 @@ public final class Measurement {
         }
 
         void run() {
-            double[] weights = GrandAverage.weights(study, request.weighting(), request.excluded(),
-                    p -> request.weighting() == GrandAverage.Weighting.TRIALS
-                            ? condition.trialWeight(study, p) : 1);
+            // trial counts are needed only for a trial-weighted grand row; exclusions are checked always
+            GrandAverage.Weighting weighting = request.grand() ? request.weighting()
+                    : GrandAverage.Weighting.UNWEIGHTED;
+            double[] weights = GrandAverage.weights(study, weighting, request.excluded(),
+                    p -> condition.trialWeight(study, p));
             int n = included.size();
             Waveforms[] waves = new Waveforms[n];
             for (int i = 0; i < n; i++) {

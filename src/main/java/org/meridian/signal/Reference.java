@@ -103,21 +103,19 @@ public sealed interface Reference {
     /** The mean of all channels except the left-out ones. */
     record Average(Set<String> leftOut) implements Reference {
         public Average {
-            Set<String> keys = new LinkedHashSet<>();
-            for (String l : leftOut) {
-                keys.add(Montage.key(l));
-            }
-            leftOut = Set.copyOf(keys);
+            leftOut = Set.copyOf(new LinkedHashSet<>(leftOut));
         }
 
         @Override
         public double[] signal(Waveforms w) {
-            List<Integer> used = new ArrayList<>();
+            Set<String> keys = new LinkedHashSet<>();
             for (String l : leftOut) {
                 w.requireIndex(l);
+                keys.add(Montage.key(l));
             }
+            List<Integer> used = new ArrayList<>();
             for (int c = 0; c < w.channelCount(); c++) {
-                if (!leftOut.contains(Montage.key(w.label(c)))) {
+                if (!keys.contains(Montage.key(w.label(c)))) {
                     used.add(c);
                 }
             }
@@ -129,7 +127,8 @@ public sealed interface Reference {
 
         @Override
         public String describe() {
-            return leftOut.isEmpty() ? "average" : "average without " + String.join(", ", leftOut);
+            return leftOut.isEmpty() ? "average"
+                    : "average without " + String.join(", ", new java.util.TreeSet<>(leftOut));
         }
     }
 
