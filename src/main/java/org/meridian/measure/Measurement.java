@@ -2,6 +2,7 @@ package org.meridian.measure;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.core.TimeAxis;
 import org.meridian.core.Waveforms;
@@ -79,20 +80,8 @@ public final class Measurement {
             for (TimeWindow w : request.windows()) {
                 windowRanges.add(w.resolve(full));
             }
-            // only the samples the measures read are taken out: the windows and each measure's
-            // reach beyond them, on an axis that starts at the first of them
-            int reach = 0;
-            for (Measure m : request.measures()) {
-                reach = Math.max(reach, m.reachSamples(request.settings(), full.rateHz()));
-            }
-            int first = full.samples() - 1;
-            int last = 0;
-            for (TimeWindow.SampleRange r : windowRanges) {
-                first = Math.min(first, r.from());
-                last = Math.max(last, r.to());
-            }
-            first = Math.max(0, first - reach);
-            last = Math.min(full.samples() - 1, last + reach);
+            int first = firstSampleRead(windowRanges, full);
+            int last = lastSampleRead(windowRanges, full);
             TimeAxis axis = new TimeAxis(full.timeMs(first), full.rateHz(), last - first + 1);
             List<TimeWindow.SampleRange> ranges = new ArrayList<>();
             for (TimeWindow.SampleRange r : windowRanges) {
@@ -107,7 +96,7 @@ public final class Measurement {
                 }
             }
             if (request.jackknife() && n < 2) {
-                throw new org.meridian.core.BadInputException(
+                throw new BadInputException(
                         "the jackknife needs at least two participants");
             }
             double[][] series = new double[n][axis.samples()];
@@ -156,6 +145,34 @@ public final class Measurement {
                     }
                 }
             }
+        }
+
+        /**
+         * Only the samples the measures read are taken out: the windows and the largest reach
+         * of any measure beyond them.
+         */
+        private int reach(TimeAxis full) {
+            int reach = 0;
+            for (Measure m : request.measures()) {
+                reach = Math.max(reach, m.reachSamples(request.settings(), full.rateHz()));
+            }
+            return reach;
+        }
+
+        private int firstSampleRead(List<TimeWindow.SampleRange> windows, TimeAxis full) {
+            int first = full.samples() - 1;
+            for (TimeWindow.SampleRange r : windows) {
+                first = Math.min(first, r.from());
+            }
+            return Math.max(0, first - reach(full));
+        }
+
+        private int lastSampleRead(List<TimeWindow.SampleRange> windows, TimeAxis full) {
+            int last = 0;
+            for (TimeWindow.SampleRange r : windows) {
+                last = Math.max(last, r.to());
+            }
+            return Math.min(full.samples() - 1, last + reach(full));
         }
 
         private Score[][] scoreAll(List<Measure> measures, Trace[] traces) {
