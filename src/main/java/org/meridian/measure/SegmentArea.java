@@ -41,26 +41,44 @@ final class SegmentArea {
         return -0.5 * ab / Math.abs(a - b) * dt;
     }
 
-    /** The area of the chosen part over samples from..to of x. */
+    /**
+     * The area of the chosen part over samples from..to of x. The trapezoid sums are sums over
+     * samples with the two end samples halved (Σ_i (x_i + x_{i+1})/2 = Σ x − (x_from + x_to)/2),
+     * and x⁺ = (x + |x|)/2; the crossings' overshoot is a separate, rarely branching loop.
+     */
     static double sum(double[] x, int from, int to, double dt, Polarity polarity) {
-        double signed = 0;
-        double clipped = 0;
-        double overshoot = 0;
-        for (int i = from; i < to; i++) {
+        double sum0 = 0;
+        double sum1 = 0;
+        double abs0 = 0;
+        double abs1 = 0;
+        int i = from;
+        for (; i + 1 <= to; i += 2) {
             double a = x[i];
             double b = x[i + 1];
-            signed += a + b;
-            clipped += a + Math.abs(a) + b + Math.abs(b);
-            double ab = a * b;
+            sum0 += a;
+            sum1 += b;
+            abs0 += Math.abs(a);
+            abs1 += Math.abs(b);
+        }
+        if (i == to) {
+            sum0 += x[i];
+            abs0 += Math.abs(x[i]);
+        }
+        double ends = 0.5 * (x[from] + x[to]);
+        double signed = (sum0 + sum1) - ends;
+        double clipped = 0.5 * ((sum0 + sum1) + (abs0 + abs1)) - 0.5 * (ends + 0.5 * (Math.abs(x[from]) + Math.abs(x[to])));
+        double overshoot = 0;
+        for (int j = from; j < to; j++) {
+            double ab = x[j] * x[j + 1];
             if (ab < 0) {
-                overshoot -= ab / Math.abs(a - b);
+                overshoot -= ab / Math.abs(x[j] - x[j + 1]);
             }
         }
-        double positive = (0.25 * clipped - 0.5 * overshoot) * dt;
+        double positive = (clipped - 0.5 * overshoot) * dt;
         return switch (polarity) {
-            case SIGNED -> 0.5 * signed * dt;
+            case SIGNED -> signed * dt;
             case POSITIVE -> positive;
-            case NEGATIVE -> 0.5 * signed * dt - positive;
+            case NEGATIVE -> signed * dt - positive;
         };
     }
 }
