@@ -32,6 +32,7 @@ final class LineScanner implements Closeable {
     private final BooleanSupplier cancelled;
     private byte[] buf = new byte[INITIAL_BUFFER];
     private int pos;
+    private long discarded;
     private int limit;
     private boolean eof;
     private boolean started;
@@ -43,6 +44,7 @@ final class LineScanner implements Closeable {
     private int cells;
     private int[] starts = new int[64];
     private int[] ends = new int[64];
+    private final NumberRows rows = new NumberRows();
 
     /**
      * @param file      the file as the user knows it, for messages
@@ -156,8 +158,14 @@ final class LineScanner implements Closeable {
         }
     }
 
+    /** How many bytes of the (decompressed) input lie before the unread part. */
+    long offset() {
+        return discarded + pos;
+    }
+
     private void refill() {
         if (pos > 0) {
+            discarded += pos;
             System.arraycopy(buf, pos, buf, 0, limit - pos);
             limit -= pos;
             pos = 0;
@@ -193,6 +201,50 @@ final class LineScanner implements Closeable {
         starts[cells] = s;
         ends[cells] = e;
         cells++;
+    }
+
+    /**
+     * Reads the next line in one pass if it is a plain row of {@code 1 + count} cells: the first
+     * a number (stored in {@code first[firstAt]}) or, when {@code labelFirst}, a label (then
+     * available as {@link #text text(0)}), followed by {@code count} numbers stored as floats
+     * times {@code factor} in {@code dest[off …]}. Returns {@link NumberRows#ROW},
+     * {@link NumberRows#END}, or {@link NumberRows#SLOW} when the line must be read with
+     * {@link #next()} instead (it is then left unread).
+     */
+    int numberRow(boolean labelFirst, double[] first, int firstAt, float[] dest, int off,
+            int count, double factor) {
+        if ((line & CANCEL_CHECK_MASK) == 0 && cancelled.getAsBoolean()) {
+            throw new CancellationException("loading cancelled");
+        }
+        if (!started) {
+            start();
+        }
+        while (true) {
+            if (pos >= limit && eof) {
+                return NumberRows.END;
+            }
+            int nl = rows.row(buf, pos, limit, delimiter, labelFirst, first, firstAt, dest, off,
+                    count, factor);
+            if (nl >= 0) {
+                if (labelFirst) {
+                    cells = 1;
+                    starts[0] = pos;
+                    ends[0] = rows.labelEnd();
+                }
+                lineStart = pos;
+                lineEnd = nl > pos && buf[nl - 1] == '\r' ? nl - 1 : nl;
+                pos = nl + 1;
+                line++;
+                return NumberRows.ROW;
+            }
+            if (nl != NumberRows.MORE) {
+                return nl;
+            }
+            if (eof) {
+                return NumberRows.SLOW;
+            }
+            refill();
+        }
     }
 
     int cellCount() {
@@ -353,7 +405,7 @@ final class LineScanner implements Closeable {
         }
         if (t.matches("[+-]?[0-9.]+([eE][+-]?[0-9]+)?")) {
             try {
-                if (Double.isInfinite(Double.parseDouble(t))) {
+                if (Math.abs(Double.parseDouble(t)) > Float.MAX_VALUE) {
                     return error(cell + 1, quote(t) + " is out of range");
                 }
             } catch (NumberFormatException ignored) {

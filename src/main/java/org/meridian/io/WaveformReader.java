@@ -1,5 +1,7 @@
 package org.meridian.io;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -25,6 +27,8 @@ import org.meridian.core.Waveforms;
  */
 public final class WaveformReader {
     private static final int INITIAL_ROWS = 1024;
+    /** Rows parsed before being written out channel-major (128 channels: 32 KB, in L1 cache). */
+    private static final int BLOCK_ROWS = 64;
 
     private WaveformReader() {
     }
@@ -40,8 +44,8 @@ public final class WaveformReader {
             String first = pre.firstColumnKey();
             pre.requireColumns(sc);
             return switch (first) {
-                case "time_ms" -> samplesAsRows(sc, pre, 1.0);
-                case "time_s" -> samplesAsRows(sc, pre, 1000.0);
+                case "time_ms" -> samplesAsRows(sc, pre, 1.0, plainSize(file));
+                case "time_s" -> samplesAsRows(sc, pre, 1000.0, plainSize(file));
                 case "channel" -> channelsAsRows(sc, pre);
                 default -> throw sc.error(1, "the header starts with "
                         + LineScanner.quote(pre.columns().get(0)) + "; a waveform file starts with"
@@ -50,51 +54,129 @@ public final class WaveformReader {
         }
     }
 
-    /** Samples as rows: values arrive sample-major and are transposed at the end. */
-    private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs) {
+    /**
+     * Samples as rows. Values arrive sample-major; they are parsed a block of rows at a time into
+     * a small buffer that stays in cache, and each block is written out channel-major. The final
+     * array is sized from the file size and the bytes of the first block when the file is not
+     * compressed, so it rarely needs to grow.
+     */
+    private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs, long size) {
         List<String> labels = labels(sc, pre.columns().subList(1, pre.columns().size()), 2);
+        ChannelMajor out = new ChannelMajor(labels.size(), INITIAL_ROWS);
         int channels = labels.size();
         int width = channels + 1;
         double factor = pre.unit().factor();
         double[] times = new double[INITIAL_ROWS];
         int[] lines = new int[INITIAL_ROWS];
-        float[] bySample = new float[INITIAL_ROWS * channels];
+        float[] block = new float[BLOCK_ROWS * channels];
+        long dataStart = sc.offset();
         int n = 0;
-        while (sc.next()) {
-            if (sc.cellCount() != width) {
-                if (sc.cellCount() == 1 && sc.isBlank()) {
-                    continue;
-                }
-                throw ragged(sc, width);
-            }
+        while (true) {
             if (n == times.length) {
-                int cap = n * 2;
-                times = Arrays.copyOf(times, cap);
-                lines = Arrays.copyOf(lines, cap);
-                bySample = Arrays.copyOf(bySample, cap * channels);
+                times = Arrays.copyOf(times, n * 2);
+                lines = Arrays.copyOf(lines, n * 2);
             }
-            times[n] = sc.number(0) * toMs;
+            int base = (n % BLOCK_ROWS) * channels;
+            int r = sc.numberRow(false, times, n, block, base, channels, factor);
+            if (r == NumberRows.END) {
+                break;
+            }
+            if (r == NumberRows.SLOW) {
+                if (!sc.next()) {
+                    break;
+                }
+                if (sc.cellCount() != width) {
+                    if (sc.cellCount() == 1 && sc.isBlank()) {
+                        continue;
+                    }
+                    throw ragged(sc, width);
+                }
+                times[n] = sc.number(0);
+                for (int c = 0; c < channels; c++) {
+                    block[base + c] = sc.value(c + 1, factor);
+                }
+            }
+            times[n] *= toMs;
             lines[n] = sc.line();
-            int base = n * channels;
-            for (int c = 0; c < channels; c++) {
-                bySample[base + c] = sc.value(c + 1, factor);
-            }
             n++;
+            if (n % BLOCK_ROWS == 0) {
+                if (n == BLOCK_ROWS && size > 0) {
+                    double bytesPerRow = (double) (sc.offset() - dataStart) / BLOCK_ROWS;
+                    out.reserve((int) Math.min(Integer.MAX_VALUE / Math.max(1, channels),
+                            (size - dataStart) / bytesPerRow * 1.01 + BLOCK_ROWS));
+                }
+                out.put(block, n - BLOCK_ROWS, BLOCK_ROWS);
+            }
         }
         if (n == 0) {
             throw new ReadException(sc.file(), pre.headerLine(), 0, "a header but no data rows");
         }
+        out.put(block, n - n % BLOCK_ROWS, n % BLOCK_ROWS);
         final int[] rowLines = lines;
         TimeAxis axis = Sampling.axis(times, n, (i, problem) ->
                 new ReadException(sc.file(), rowLines[i], 1, problem));
-        float[] byChannel = new float[channels * n];
-        for (int s = 0; s < n; s++) {
-            int base = s * channels;
-            for (int c = 0; c < channels; c++) {
-                byChannel[c * n + s] = bySample[base + c];
+        return Waveforms.wrap(labels, axis, pre.unit().unit(), out.values(n));
+    }
+
+    /** Channel-major values whose sample count grows: channel c's samples start at c · capacity. */
+    private static final class ChannelMajor {
+        private final int channels;
+        private int capacity;
+        private float[] values;
+
+        ChannelMajor(int channels, int capacity) {
+            this.channels = channels;
+            this.capacity = capacity;
+            this.values = new float[channels * capacity];
+        }
+
+        void reserve(int samples) {
+            if (samples > capacity) {
+                float[] bigger = new float[Math.multiplyExact(channels, samples)];
+                for (int c = 0; c < channels; c++) {
+                    System.arraycopy(values, c * capacity, bigger, c * samples, capacity);
+                }
+                values = bigger;
+                capacity = samples;
             }
         }
-        return Waveforms.wrap(labels, axis, pre.unit().unit(), byChannel);
+
+        /** Writes {@code rows} sample-major rows of {@code block} from sample {@code first} on. */
+        void put(float[] block, int first, int rows) {
+            if (first + rows > capacity) {
+                reserve(Math.max(first + rows, capacity * 2));
+            }
+            for (int c = 0; c < channels; c++) {
+                int at = c * capacity + first;
+                for (int r = 0; r < rows; r++) {
+                    values[at + r] = block[r * channels + c];
+                }
+            }
+        }
+
+        /** The values of {@code samples} samples per channel, packed. */
+        float[] values(int samples) {
+            if (samples == capacity) {
+                return values;
+            }
+            float[] packed = new float[channels * samples];
+            for (int c = 0; c < channels; c++) {
+                System.arraycopy(values, c * capacity, packed, c * samples, samples);
+            }
+            return packed;
+        }
+    }
+
+    /** The size of an uncompressed file (a hint for sizing arrays), or -1. */
+    private static long plainSize(Path file) {
+        try {
+            if (TextInput.isGzip(file)) {
+                return -1;
+            }
+            return Files.size(file);
+        } catch (IOException e) {
+            return -1;
+        }
     }
 
     /** Channels as rows: the header holds the times, each row one channel. */
@@ -112,12 +194,29 @@ public final class WaveformReader {
         List<String> labels = new ArrayList<>();
         Map<String, Integer> seenOnLine = new HashMap<>();
         float[] byChannel = new float[16 * samples];
-        while (sc.next()) {
-            if (sc.cellCount() != width) {
-                if (sc.cellCount() == 1 && sc.isBlank()) {
-                    continue;
+        while (true) {
+            int c = labels.size();
+            if ((c + 1) * samples > byChannel.length) {
+                byChannel = Arrays.copyOf(byChannel, byChannel.length * 2);
+            }
+            int base = c * samples;
+            int r = sc.numberRow(true, null, 0, byChannel, base, samples, factor);
+            if (r == NumberRows.END) {
+                break;
+            }
+            if (r == NumberRows.SLOW) {
+                if (!sc.next()) {
+                    break;
                 }
-                throw ragged(sc, width);
+                if (sc.cellCount() != width) {
+                    if (sc.cellCount() == 1 && sc.isBlank()) {
+                        continue;
+                    }
+                    throw ragged(sc, width);
+                }
+                for (int s = 0; s < samples; s++) {
+                    byChannel[base + s] = sc.value(s + 1, factor);
+                }
             }
             String label = sc.text(0);
             if (label.isEmpty()) {
@@ -127,14 +226,6 @@ public final class WaveformReader {
             if (previous != null) {
                 throw sc.error(1, "channel " + label + " appears twice (also on line " + previous
                         + ")");
-            }
-            int c = labels.size();
-            if ((c + 1) * samples > byChannel.length) {
-                byChannel = Arrays.copyOf(byChannel, byChannel.length * 2);
-            }
-            int base = c * samples;
-            for (int s = 0; s < samples; s++) {
-                byChannel[base + s] = sc.value(s + 1, factor);
             }
             labels.add(label);
         }
