@@ -22,7 +22,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * Loads a generated study of 100 participants × 4 conditions × 128 channels × 1000 samples
  * (400 files, about 460 MB of text) through {@link StudyLoader} in a JVM limited to 450 MB of
  * heap: the benchmark completing shows the study fits. After each load the heap still in use
- * is printed; the values alone take 100·4·128·1000·4 B = 204.8 MB. The time per load is the
+ * is printed; the values alone take 100·4·128·1000·4 B = 204.8 MB (195.3 MiB). The time per load is the
  * whole study read on all cores.
  */
 @State(Scope.Benchmark)
@@ -73,8 +73,8 @@ public class StudyHeapBench {
         Runtime rt = Runtime.getRuntime();
         System.gc();
         long used = rt.totalMemory() - rt.freeMemory();
-        System.out.printf("%n# heap in use with the study loaded: %.1f MB of at most %.1f MB"
-                + " (%d cells)%n", used / 1e6, rt.maxMemory() / 1e6,
+        System.out.printf("%n# heap in use with the study loaded: %.1f MiB of at most %.1f MiB"
+                + " (%d cells)%n", used / 1048576.0, rt.maxMemory() / 1048576.0,
                 loaded.participants().size() * loaded.conditions().size());
         loaded = null;
     }

@@ -15,7 +15,10 @@ import java.util.function.BooleanSupplier;
  * The byte-level tokenizer under every reader: it walks a stream line by line (LF or CRLF, a
  * UTF-8 byte-order mark skipped) and, once the delimiter is known, splits each line into cells
  * in the same pass, recording only where each cell starts and ends. Numbers are parsed straight
- * from those bytes with the fast double parser, so no String is made for a numeric cell.
+ * from those bytes with the fast double parser, so no String is made for a numeric cell. Rows
+ * made only of plain numbers take a faster road still, {@link #numberRow} ({@link NumberRows}),
+ * which finds and parses the cells in one pass; this class's cell methods read everything else
+ * and describe every problem.
  *
  * <p>Lines and columns are counted from 1; a column is a cell. Every problem is reported as a
  * {@link ReadException} naming the file, the line and the cell.
