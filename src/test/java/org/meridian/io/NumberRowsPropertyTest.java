@@ -20,7 +20,7 @@ import org.meridian.core.Waveforms;
  * The one-pass row reader gives bit for bit the values of the fast double parser on its own,
  * for every number form, near buffer ends, and under unit factors.
  */
-class NumberRowsProperties {
+class NumberRowsPropertyTest {
 
     /** A random decimal in one of the forms files use. */
     static String number(Random r) {

@@ -30,7 +30,7 @@ import org.meridian.io.VariantWriter.Variant;
  * Every broken variant of a valid file fails with a one-line {@link BadInputException} that
  * names the file, line and cell at fault, and never with any other exception.
  */
-class BrokenInputProperties {
+class BrokenInputPropertyTest {
 
     enum FileBreak {
         DUPLICATE_LABEL, NON_NUMERIC, DECIMAL_COMMA, NAN, INFINITE, RAGGED_SHORT, RAGGED_LONG,
@@ -39,7 +39,7 @@ class BrokenInputProperties {
 
     enum StudyBreak { MISSING_FILE, DIFFERENT_CHANNELS, DIFFERENT_AXIS, SAME_POSITION }
 
-    @Property(tries = 150)
+    @Property(tries = 300)
     void everyBrokenWaveformFileNamesItsFault(@ForAll("singleFiles") Variant v,
             @ForAll FileBreak kind, @ForAll("seeds") long seed) throws Exception {
         Random r = new Random(seed);
