@@ -205,9 +205,9 @@ class ReadErrorMessagesTest {
         file("p01.tsv", "time_ms\tCz\tPz\n0\t1\t1\n4\t2\t2\n");
         file("p02.tsv", "time_ms\tCz\tOz\n0\t1\t1\n4\t2\t2\n");
         file("study.tsv", "participant\tcondition\tfile\np01\trare\tp01.tsv\np02\trare\tp02.tsv\n");
-        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " and "
-                + dir.resolve("p02.tsv") + " have different channels: the second lacks Pz; the"
-                + " second adds Oz");
+        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " (participant p01,"
+                + " condition rare) and " + dir.resolve("p02.tsv") + " (participant p02, condition"
+                + " rare) have different channels: second lacks Pz; second adds Oz");
     }
 
     @Test
@@ -215,8 +215,9 @@ class ReadErrorMessagesTest {
         file("p01.tsv", "time_ms\tCz\n0\t1\n4\t2\n");
         file("p02.tsv", "time_ms\tCz\n0\t1\n2\t2\n");
         file("study.tsv", "participant\tcondition\tfile\np01\trare\tp01.tsv\np01\tcommon\tp02.tsv\n");
-        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " and "
-                + dir.resolve("p02.tsv") + " have different time axes: 250 Hz vs 500 Hz");
+        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " (participant p01,"
+                + " condition rare) and " + dir.resolve("p02.tsv") + " (participant p01, condition"
+                + " common) have different time axes: 250 Hz vs 500 Hz");
     }
 
     @Test
@@ -224,8 +225,9 @@ class ReadErrorMessagesTest {
         file("p01.tsv", "time_ms\tCz\n0\t1\n4\t2\n");
         file("p02.tsv", "# unit: uV/m2\ntime_ms\tCz\n0\t1\n4\t2\n");
         file("study.tsv", "participant\tcondition\tfile\np01\trare\tp01.tsv\np02\trare\tp02.tsv\n");
-        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " and "
-                + dir.resolve("p02.tsv") + " have different units: µV vs µV/m²");
+        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " (participant p01,"
+                + " condition rare) and " + dir.resolve("p02.tsv") + " (participant p02, condition"
+                + " rare) have different units: µV vs µV/m²");
     }
 
     @Test
