@@ -301,4 +301,23 @@ class ReadErrorMessagesTest {
         assertThat(error(f)).isEqualTo(f + ": no value for participant p01, condition rare,"
                 + " channel Pz at 4 ms");
     }
+
+    @Test
+    void binaryFileIsNotATable() throws IOException {
+        Path f = dir.resolve("image.tsv");
+        Files.write(f, new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, '\n', 1, 2});
+        assertThat(error(f)).isEqualTo(f + " line 1: this is not a text table (it holds binary"
+                + " data)");
+    }
+
+    @Test
+    void truncatedCompressedFileIsNamed() throws IOException {
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        try (java.util.zip.GZIPOutputStream gz = new java.util.zip.GZIPOutputStream(bytes)) {
+            gz.write("time_ms\tCz\n0\t1\n4\t2\n8\t3\n".getBytes(StandardCharsets.UTF_8));
+        }
+        Path f = dir.resolve("cut.tsv.gz");
+        Files.write(f, java.util.Arrays.copyOf(bytes.toByteArray(), 25));
+        assertThat(error(f)).endsWith(": the compressed data is damaged or cut short");
+    }
 }
