@@ -19,6 +19,7 @@ import picocli.CommandLine.Option;
         subcommands = {
             MontageCommand.class,
             InfoCommand.class,
+            SimulateCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;

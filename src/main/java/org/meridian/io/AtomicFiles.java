@@ -8,6 +8,9 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 import org.meridian.core.BadInputException;
 
 /**
@@ -44,6 +47,7 @@ public final class AtomicFiles {
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 content.writeTo(out);
             }
+            giveUsualPermissions(tmp, abs);
             moveIntoPlace(tmp, abs);
             tmp = null;
         } catch (IOException e) {
@@ -60,6 +64,20 @@ public final class AtomicFiles {
         } catch (AtomicMoveNotSupportedException e) {
             Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
         }
+    }
+
+    /**
+     * Temporary files are created readable by their owner only; an export should look like any
+     * other file the user writes: the permissions of the file it replaces, else rw-r--r--.
+     */
+    static void giveUsualPermissions(Path tmp, Path target) throws IOException {
+        if (!tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            return;
+        }
+        Set<PosixFilePermission> perms = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(tmp, perms);
     }
 
     private static void deleteQuietly(Path p) {
