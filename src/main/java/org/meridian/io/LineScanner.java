@@ -35,7 +35,6 @@ final class LineScanner implements Closeable {
     private final BooleanSupplier cancelled;
     private byte[] buf = new byte[INITIAL_BUFFER];
     private int pos;
-    private long discarded;
     private int limit;
     private boolean eof;
     private boolean started;
@@ -161,14 +160,8 @@ final class LineScanner implements Closeable {
         }
     }
 
-    /** How many bytes of the (decompressed) input lie before the unread part. */
-    long offset() {
-        return discarded + pos;
-    }
-
     private void refill() {
         if (pos > 0) {
-            discarded += pos;
             System.arraycopy(buf, pos, buf, 0, limit - pos);
             limit -= pos;
             pos = 0;

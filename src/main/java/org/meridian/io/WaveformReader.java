@@ -1,7 +1,5 @@
 package org.meridian.io;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -27,7 +25,7 @@ import org.meridian.core.Waveforms;
  */
 public final class WaveformReader {
     private static final int INITIAL_ROWS = 1024;
-    /** Rows parsed before being written out channel-major (128 channels: 32 KB, in L1 cache). */
+    /** Rows parsed into one block (with 128 channels 32 KB, which stays in cache). */
     private static final int BLOCK_ROWS = 64;
 
     private WaveformReader() {
@@ -44,8 +42,8 @@ public final class WaveformReader {
             String first = pre.firstColumnKey();
             pre.requireColumns(sc);
             return switch (first) {
-                case "time_ms" -> samplesAsRows(sc, pre, 1.0, plainSize(file));
-                case "time_s" -> samplesAsRows(sc, pre, 1000.0, plainSize(file));
+                case "time_ms" -> samplesAsRows(sc, pre, 1.0);
+                case "time_s" -> samplesAsRows(sc, pre, 1000.0);
                 case "channel" -> channelsAsRows(sc, pre);
                 default -> throw sc.error(1, "the header starts with "
                         + LineScanner.quote(pre.columns().get(0)) + "; a waveform file starts with"
@@ -55,21 +53,19 @@ public final class WaveformReader {
     }
 
     /**
-     * Samples as rows. Values arrive sample-major; they are parsed a block of rows at a time into
-     * a small buffer that stays in cache, and each block is written out channel-major. The final
-     * array is sized from the file size and the bytes of the first block when the file is not
-     * compressed, so it rarely needs to grow.
+     * Samples as rows. Values arrive sample-major and are parsed into blocks of rows small
+     * enough to stay in cache; at the end each block is written channel-major into the one
+     * array of the exact size, so nothing is copied twice.
      */
-    private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs, long size) {
+    private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs) {
         List<String> labels = labels(sc, pre.columns().subList(1, pre.columns().size()), 2);
-        ChannelMajor out = new ChannelMajor(labels.size(), INITIAL_ROWS);
         int channels = labels.size();
         int width = channels + 1;
         double factor = pre.unit().factor();
         double[] times = new double[INITIAL_ROWS];
         int[] lines = new int[INITIAL_ROWS];
+        List<float[]> blocks = new ArrayList<>();
         float[] block = new float[BLOCK_ROWS * channels];
-        long dataStart = sc.offset();
         int n = 0;
         while (true) {
             if (n == times.length) {
@@ -100,83 +96,32 @@ public final class WaveformReader {
             lines[n] = sc.line();
             n++;
             if (n % BLOCK_ROWS == 0) {
-                if (n == BLOCK_ROWS && size > 0) {
-                    double bytesPerRow = (double) (sc.offset() - dataStart) / BLOCK_ROWS;
-                    out.reserve((int) Math.min(Integer.MAX_VALUE / Math.max(1, channels),
-                            (size - dataStart) / bytesPerRow * 1.01 + BLOCK_ROWS));
-                }
-                out.put(block, n - BLOCK_ROWS, BLOCK_ROWS);
+                blocks.add(block);
+                block = new float[BLOCK_ROWS * channels];
             }
         }
         if (n == 0) {
             throw new ReadException(sc.file(), pre.headerLine(), 0, "a header but no data rows");
         }
-        out.put(block, n - n % BLOCK_ROWS, n % BLOCK_ROWS);
+        if (n % BLOCK_ROWS != 0) {
+            blocks.add(block);
+        }
         final int[] rowLines = lines;
         TimeAxis axis = Sampling.axis(times, n, (i, problem) ->
                 new ReadException(sc.file(), rowLines[i], 1, problem));
-        return Waveforms.wrap(labels, axis, pre.unit().unit(), out.values(n));
-    }
-
-    /** Channel-major values whose sample count grows: channel c's samples start at c · capacity. */
-    private static final class ChannelMajor {
-        private final int channels;
-        private int capacity;
-        private float[] values;
-
-        ChannelMajor(int channels, int capacity) {
-            this.channels = channels;
-            this.capacity = capacity;
-            this.values = new float[channels * capacity];
-        }
-
-        void reserve(int samples) {
-            if (samples > capacity) {
-                float[] bigger = new float[Math.multiplyExact(channels, samples)];
-                for (int c = 0; c < channels; c++) {
-                    System.arraycopy(values, c * capacity, bigger, c * samples, capacity);
-                }
-                values = bigger;
-                capacity = samples;
-            }
-        }
-
-        /** Writes {@code rows} sample-major rows of {@code block} from sample {@code first} on. */
-        void put(float[] block, int first, int rows) {
-            if (first + rows > capacity) {
-                reserve(Math.max(first + rows, capacity * 2));
-            }
+        float[] byChannel = new float[Math.multiplyExact(channels, n)];
+        for (int k = 0; k < blocks.size(); k++) {
+            float[] rows = blocks.get(k);
+            int first = k * BLOCK_ROWS;
+            int count = Math.min(BLOCK_ROWS, n - first);
             for (int c = 0; c < channels; c++) {
-                int at = c * capacity + first;
-                for (int r = 0; r < rows; r++) {
-                    values[at + r] = block[r * channels + c];
+                int at = c * n + first;
+                for (int i = 0; i < count; i++) {
+                    byChannel[at + i] = rows[i * channels + c];
                 }
             }
         }
-
-        /** The values of {@code samples} samples per channel, packed. */
-        float[] values(int samples) {
-            if (samples == capacity) {
-                return values;
-            }
-            float[] packed = new float[channels * samples];
-            for (int c = 0; c < channels; c++) {
-                System.arraycopy(values, c * capacity, packed, c * samples, samples);
-            }
-            return packed;
-        }
-    }
-
-    /** The size of an uncompressed file (a hint for sizing arrays), or -1. */
-    private static long plainSize(Path file) {
-        try {
-            if (TextInput.isGzip(file)) {
-                return -1;
-            }
-            return Files.size(file);
-        } catch (IOException e) {
-            return -1;
-        }
+        return Waveforms.wrap(labels, axis, pre.unit().unit(), byChannel);
     }
 
     /** Channels as rows: the header holds the times, each row one channel. */
