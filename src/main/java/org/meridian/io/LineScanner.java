@@ -203,12 +203,12 @@ final class LineScanner implements Closeable {
      * Reads the next line in one pass if it is a plain row of {@code 1 + count} cells: the first
      * a number (stored in {@code first[firstAt]}) or, when {@code labelFirst}, a label (then
      * available as {@link #text text(0)}), followed by {@code count} numbers stored as floats
-     * times {@code factor} in {@code dest[off …]}. Returns {@link NumberRows#ROW},
+     * times {@code factor} in {@code dest[off + k · stride]}. Returns {@link NumberRows#ROW},
      * {@link NumberRows#END}, or {@link NumberRows#SLOW} when the line must be read with
      * {@link #next()} instead (it is then left unread).
      */
     int numberRow(boolean labelFirst, double[] first, int firstAt, float[] dest, int off,
-            int count, double factor) {
+            int stride, int count, double factor) {
         if ((line & CANCEL_CHECK_MASK) == 0 && cancelled.getAsBoolean()) {
             throw new CancellationException("loading cancelled");
         }
@@ -220,7 +220,7 @@ final class LineScanner implements Closeable {
                 return NumberRows.END;
             }
             int nl = rows.row(buf, pos, limit, delimiter, labelFirst, first, firstAt, dest, off,
-                    count, factor);
+                    stride, count, factor);
             if (nl >= 0) {
                 if (labelFirst) {
                     cells = 1;

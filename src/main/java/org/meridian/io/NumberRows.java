@@ -57,11 +57,11 @@ final class NumberRows {
      * Reads one row from {@code b[from …]}: its first cell a number (stored in
      * {@code first[firstAt]}) or, when {@code labelFirst}, a label (its end then in
      * {@link #labelEnd}), then {@code count} numbers as floats times {@code factor} into
-     * {@code dest[off …]}. Returns the index of the row's line feed, or {@link #SLOW} or
+     * {@code dest[off + k · stride]}. Returns the index of the row's line feed, or {@link #SLOW} or
      * {@link #MORE}.
      */
     int row(byte[] b, int from, int lim, byte d, boolean labelFirst, double[] first, int firstAt,
-            float[] dest, int off, int count, double factor) {
+            float[] dest, int off, int stride, int count, double factor) {
         int i = from;
         if (labelFirst) {
             while (i < lim && b[i] != d && b[i] != '\n') {
@@ -99,7 +99,7 @@ final class NumberRows {
                     return cellEnd;
                 }
             }
-            dest[off + k] = v;
+            dest[off + k * stride] = v;
             i = cellEnd;
         }
         if (b[i] == '\r') {

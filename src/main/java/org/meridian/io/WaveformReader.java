@@ -53,9 +53,10 @@ public final class WaveformReader {
     }
 
     /**
-     * Samples as rows. Values arrive sample-major and are parsed into blocks of rows small
-     * enough to stay in cache; at the end each block is written channel-major into the one
-     * array of the exact size, so nothing is copied twice.
+     * Samples as rows. Values arrive sample-major; they are parsed straight into blocks of
+     * {@value #BLOCK_ROWS} rows held channel-major (small enough to stay in cache while they
+     * fill), and at the end each block's channel runs are copied into the one array of the exact
+     * size.
      */
     private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs) {
         List<String> labels = labels(sc, pre.columns().subList(1, pre.columns().size()), 2);
@@ -72,8 +73,8 @@ public final class WaveformReader {
                 times = Arrays.copyOf(times, n * 2);
                 lines = Arrays.copyOf(lines, n * 2);
             }
-            int base = (n % BLOCK_ROWS) * channels;
-            int r = sc.numberRow(false, times, n, block, base, channels, factor);
+            int row = n % BLOCK_ROWS;
+            int r = sc.numberRow(false, times, n, block, row, BLOCK_ROWS, channels, factor);
             if (r == NumberRows.END) {
                 break;
             }
@@ -89,7 +90,7 @@ public final class WaveformReader {
                 }
                 times[n] = sc.number(0);
                 for (int c = 0; c < channels; c++) {
-                    block[base + c] = sc.value(c + 1, factor);
+                    block[c * BLOCK_ROWS + row] = sc.value(c + 1, factor);
                 }
             }
             times[n] *= toMs;
@@ -115,10 +116,7 @@ public final class WaveformReader {
             int first = k * BLOCK_ROWS;
             int count = Math.min(BLOCK_ROWS, n - first);
             for (int c = 0; c < channels; c++) {
-                int at = c * n + first;
-                for (int i = 0; i < count; i++) {
-                    byChannel[at + i] = rows[i * channels + c];
-                }
+                System.arraycopy(rows, c * BLOCK_ROWS, byChannel, c * n + first, count);
             }
         }
         return Waveforms.wrap(labels, axis, pre.unit().unit(), byChannel);
@@ -145,7 +143,7 @@ public final class WaveformReader {
                 byChannel = Arrays.copyOf(byChannel, byChannel.length * 2);
             }
             int base = c * samples;
-            int r = sc.numberRow(true, null, 0, byChannel, base, samples, factor);
+            int r = sc.numberRow(true, null, 0, byChannel, base, 1, samples, factor);
             if (r == NumberRows.END) {
                 break;
             }
