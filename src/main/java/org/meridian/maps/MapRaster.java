@@ -22,13 +22,17 @@ public final class MapRaster {
     private final int size;
     private final MapGrid display;
     private final MapGrid coarse;
+    private final int span;
     private final int[] nodes;
     private final SplineWeights weights;
-    private final int[] pixels;
-    private final int[] cell;
-    private final float[] fx;
-    private final float[] fy;
-    private final int span;
+    /** Per display column: the coarse column left of it and the fraction toward the next. */
+    private final int[] columnCell;
+    private final float[] columnFraction;
+    /** Per display row: the coarse row above it and the fraction toward the next. */
+    private final int[] rowCell;
+    private final float[] rowFraction;
+    /** Per display row: runs of map pixels as [first, end) column pairs. */
+    private final int[][] runs;
 
     /**
      * @param displaySize pixels across the display square
@@ -45,35 +49,45 @@ public final class MapRaster {
         this.display = MapGrid.pixels(displaySize, h);
         this.coarse = MapGrid.nodes(coarseSize, h);
         this.span = coarseSize;
+        this.columnCell = new int[displaySize];
+        this.columnFraction = new float[displaySize];
+        this.rowCell = new int[displaySize];
+        this.rowFraction = new float[displaySize];
+        for (int i = 0; i < displaySize; i++) {
+            double c = coarse.column(display.x(i));
+            int c0 = Math.max(0, Math.min(coarseSize - 2, (int) Math.floor(c)));
+            columnCell[i] = c0;
+            columnFraction[i] = (float) (c - c0);
+            double r = coarse.row(display.y(i));
+            int r0 = Math.max(0, Math.min(coarseSize - 2, (int) Math.floor(r)));
+            rowCell[i] = r0;
+            rowFraction[i] = (float) (r - r0);
+        }
         MapRegion region = layout.region();
-        int[] inside = new int[displaySize * displaySize];
-        int count = 0;
+        boolean[] needed = new boolean[coarseSize * coarseSize];
+        this.runs = new int[displaySize][];
+        int[] buffer = new int[displaySize + 2];
         for (int row = 0; row < displaySize; row++) {
+            int count = 0;
+            boolean open = false;
             for (int col = 0; col < displaySize; col++) {
-                if (region.contains(display.x(col), display.y(row))) {
-                    inside[count++] = row * displaySize + col;
+                boolean in = region.contains(display.x(col), display.y(row));
+                if (in) {
+                    int base = rowCell[row] * coarseSize + columnCell[col];
+                    needed[base] = true;
+                    needed[base + 1] = true;
+                    needed[base + coarseSize] = true;
+                    needed[base + coarseSize + 1] = true;
+                }
+                if (in != open) {
+                    buffer[count++] = col;
+                    open = in;
                 }
             }
-        }
-        this.pixels = Arrays.copyOf(inside, count);
-        this.cell = new int[count];
-        this.fx = new float[count];
-        this.fy = new float[count];
-        boolean[] needed = new boolean[coarseSize * coarseSize];
-        for (int k = 0; k < count; k++) {
-            int p = pixels[k];
-            double c = coarse.column(display.x(p % displaySize));
-            double r = coarse.row(display.y(p / displaySize));
-            int c0 = Math.max(0, Math.min(coarseSize - 2, (int) Math.floor(c)));
-            int r0 = Math.max(0, Math.min(coarseSize - 2, (int) Math.floor(r)));
-            fx[k] = (float) (c - c0);
-            fy[k] = (float) (r - r0);
-            int base = r0 * coarseSize + c0;
-            cell[k] = base;
-            needed[base] = true;
-            needed[base + 1] = true;
-            needed[base + coarseSize] = true;
-            needed[base + coarseSize + 1] = true;
+            if (open) {
+                buffer[count++] = displaySize;
+            }
+            runs[row] = Arrays.copyOf(buffer, count);
         }
         int n = 0;
         int[] list = new int[needed.length];
@@ -108,9 +122,16 @@ public final class MapRaster {
     /** The upsampled values at every display pixel (NaN outside the map), size² floats. */
     public void values(double[] channelValues, float[] out) {
         float[] grid = coarseValues(channelValues);
-        Arrays.fill(out, Float.NaN);
-        for (int k = 0; k < pixels.length; k++) {
-            out[pixels[k]] = interpolate(grid, k);
+        Arrays.fill(out, 0, size * size, Float.NaN);
+        for (int row = 0; row < size; row++) {
+            int[] r = runs[row];
+            int top = rowCell[row] * span;
+            float w = rowFraction[row];
+            for (int k = 0; k < r.length; k += 2) {
+                for (int col = r[k]; col < r[k + 1]; col++) {
+                    out[row * size + col] = interpolate(grid, top + columnCell[col], columnFraction[col], w);
+                }
+            }
         }
     }
 
@@ -127,10 +148,18 @@ public final class MapRaster {
         float lower = (float) limits.lower();
         float scale = (float) ((colourTable.length - 1) / (limits.upper() - limits.lower()));
         int last = colourTable.length - 1;
-        for (int k = 0; k < pixels.length; k++) {
-            float v = interpolate(grid, k);
-            int i = (int) ((v - lower) * scale + 0.5f);
-            argb[pixels[k]] = colourTable[i < 0 ? 0 : (i > last ? last : i)];
+        for (int row = 0; row < size; row++) {
+            int[] r = runs[row];
+            int top = rowCell[row] * span;
+            float w = rowFraction[row];
+            int offset = row * size;
+            for (int k = 0; k < r.length; k += 2) {
+                for (int col = r[k]; col < r[k + 1]; col++) {
+                    float v = interpolate(grid, top + columnCell[col], columnFraction[col], w);
+                    int i = (int) ((v - lower) * scale + 0.5f);
+                    argb[offset + col] = colourTable[i < 0 ? 0 : (i > last ? last : i)];
+                }
+            }
         }
     }
 
@@ -143,10 +172,7 @@ public final class MapRaster {
         return grid;
     }
 
-    private float interpolate(float[] grid, int k) {
-        int b = cell[k];
-        float u = fx[k];
-        float w = fy[k];
+    private float interpolate(float[] grid, int b, float u, float w) {
         float top = grid[b] + u * (grid[b + 1] - grid[b]);
         float bottom = grid[b + span] + u * (grid[b + span + 1] - grid[b + span]);
         return top + w * (bottom - top);

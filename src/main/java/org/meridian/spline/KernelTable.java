@@ -80,11 +80,17 @@ public final class KernelTable {
         return hRemainder;
     }
 
-    /** One tabulated series: value and Δx · derivative at each node, interleaved. */
+    /**
+     * One tabulated series: on each interval between nodes, the cubic Hermite interpolant of the
+     * values and derivatives at its two ends, stored as its four coefficients in the local
+     * variable u ∈ [0, 1] (value, Δx·slope, and the two higher coefficients), so a lookup is one
+     * index and three multiply–adds.
+     */
     static final class Table {
         final int nodes;
         private final double inverseStep;
-        private final double[] valueAndSlope;
+        private final int lastInterval;
+        private final double[] cubic;
 
         Table(double[] coefficients) {
             int terms = coefficients.length - 1;
@@ -103,7 +109,9 @@ public final class KernelTable {
             this.nodes = n;
             double step = 2.0 / (n - 1);
             this.inverseStep = 1 / step;
-            this.valueAndSlope = new double[2 * n];
+            this.lastInterval = n - 2;
+            double[] value = new double[n];
+            double[] slope = new double[n];
             double[] p = new double[terms + 1];
             double[] dp = new double[terms + 1];
             for (int i = 0; i < n; i++) {
@@ -116,30 +124,29 @@ public final class KernelTable {
                     v += coefficients[k] * p[k];
                     d += coefficients[k] * dp[k];
                 }
-                valueAndSlope[2 * i] = v;
-                valueAndSlope[2 * i + 1] = d * step;
+                value[i] = v;
+                slope[i] = d * step;
+            }
+            this.cubic = new double[4 * (n - 1)];
+            for (int i = 0; i + 1 < n; i++) {
+                double f0 = value[i];
+                double f1 = value[i + 1];
+                double s0 = slope[i];
+                double s1 = slope[i + 1];
+                cubic[4 * i] = f0;
+                cubic[4 * i + 1] = s0;
+                cubic[4 * i + 2] = 3 * (f1 - f0) - 2 * s0 - s1;
+                cubic[4 * i + 3] = 2 * (f0 - f1) + s0 + s1;
             }
         }
 
         /** The interpolated value at x in [−1, 1] (the caller clamps). */
         double valueAt(double x) {
             double t = (x + 1) * inverseStep;
-            int i = (int) t;
-            if (i >= nodes - 1) {
-                i = nodes - 2;
-            } else if (i < 0) {
-                i = 0;
-            }
+            int i = Math.min((int) t, lastInterval);
             double u = t - i;
-            int k = 2 * i;
-            double f0 = valueAndSlope[k];
-            double s0 = valueAndSlope[k + 1];
-            double f1 = valueAndSlope[k + 2];
-            double s1 = valueAndSlope[k + 3];
-            // cubic Hermite in Horner form: f0 + u·(s0 + u·(a + u·b))
-            double a = 3 * (f1 - f0) - 2 * s0 - s1;
-            double b = 2 * (f0 - f1) + s0 + s1;
-            return f0 + u * (s0 + u * (a + u * b));
+            int k = 4 * i;
+            return cubic[k] + u * (cubic[k + 1] + u * (cubic[k + 2] + u * cubic[k + 3]));
         }
     }
 }

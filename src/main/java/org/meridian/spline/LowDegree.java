@@ -59,11 +59,12 @@ final class LowDegree {
     }
 
     private static double power(double v, int k) {
-        double p = 1;
-        for (int i = 0; i < k; i++) {
-            p *= v;
-        }
-        return p;
+        return switch (k) {
+            case 0 -> 1;
+            case 1 -> v;
+            case 2 -> v * v;
+            default -> v * v * v;
+        };
     }
 
     private static int factorial(int k) {

@@ -150,33 +150,49 @@ public final class SphericalSpline {
      * Weights that evaluate the quantity at many points (unit vectors {x, y, z}): precomputed
      * once, then each map is one matrix–vector product (see {@link SplineWeights}).
      *
-     * <p>Each point's row holds, in single precision, the factor times the kernel's remainder
-     * beyond degree 3 at the N electrodes, followed by the 20 monomials of the point of
-     * {@link LowDegree}; the matching (N + 20) × N double-precision operator turns a map's
-     * values into c (for the remainder) and the exact low-degree weights (with c₀ for the
-     * potential).
+     * <p>The weights are, in single precision, the factor times the kernel's remainder beyond
+     * degree 3 between each point and each of the N electrodes, followed by the 20 monomials of
+     * {@link LowDegree} at each point; the matching (N + 20) × N double-precision operator turns
+     * a map's values into c (for the remainder) and the exact low-degree weights (with c₀ for
+     * the potential).
      */
     public SplineWeights weightsAt(Quantity quantity, double[][] points) {
         int n = ex.length;
+        int count = points.length;
         int width = n + LowDegree.COUNT;
-        float[] rows = new float[Math.multiplyExact(points.length, width)];
+        float[][] columns = new float[width][count];
+        double[] px = new double[count];
+        double[] py = new double[count];
+        double[] pz = new double[count];
+        for (int p = 0; p < count; p++) {
+            px[p] = points[p][0];
+            py[p] = points[p][1];
+            pz[p] = points[p][2];
+        }
         double factor = kernelFactor(quantity);
         KernelTable.Table remainder = quantity == Quantity.CSD ? kernel.hRemainder() : kernel.gRemainder();
-        for (int p = 0; p < points.length; p++) {
-            double[] r = points[p];
-            double x = r[0];
-            double y = r[1];
-            double z = r[2];
-            int off = p * width;
-            for (int j = 0; j < n; j++) {
-                double c = SplineKernel.clamp(x * ex[j] + y * ey[j] + z * ez[j]);
-                rows[off + j] = (float) (factor * remainder.valueAt(c));
+        double[] cosine = new double[count];
+        // one electrode at a time: the cosines vectorise, and neighbouring points read
+        // neighbouring table entries
+        for (int j = 0; j < n; j++) {
+            double x = ex[j];
+            double y = ey[j];
+            double z = ez[j];
+            for (int p = 0; p < count; p++) {
+                cosine[p] = Math.max(-1.0, Math.min(1.0, px[p] * x + py[p] * y + pz[p] * z));
             }
-            for (int m = 0; m < LowDegree.COUNT; m++) {
-                rows[off + n + m] = (float) LowDegree.monomial(m, x, y, z);
+            float[] column = columns[j];
+            for (int p = 0; p < count; p++) {
+                column[p] = (float) (factor * remainder.valueAt(cosine[p]));
             }
         }
-        return new SplineWeights(quantity, points.length, n, rows, weightsOperator(quantity));
+        for (int m = 0; m < LowDegree.COUNT; m++) {
+            float[] column = columns[n + m];
+            for (int p = 0; p < count; p++) {
+                column[p] = (float) LowDegree.monomial(m, px[p], py[p], pz[p]);
+            }
+        }
+        return new SplineWeights(quantity, count, n, columns, weightsOperator(quantity));
     }
 
     /**

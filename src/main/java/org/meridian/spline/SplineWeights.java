@@ -4,27 +4,34 @@ package org.meridian.spline;
  * Precomputed weights that evaluate a fitted {@link SphericalSpline} at a fixed set of points
  * (the pixels of a map grid, say), for any data on the spline's montage.
  *
- * <p>Held in factored form: a points × (N + 20) matrix of single-precision rows and an
+ * <p>Held in factored form: a points × (N + 20) matrix K of single-precision weights and an
  * (N + 20) × N double-precision operator B (built by {@link SphericalSpline#weightsAt}). One map
- * v is b = B v (small) followed by the one large matrix–vector product rows · b; many maps at
- * once are one matrix–matrix product. The explicit points × N weights would cost points × N² to
- * form and no less to apply, so they are never formed for maps. Immutable and safe to share
- * between threads.
+ * v is b = B v (small) followed by the one large matrix–vector product K b; many maps at once
+ * are one matrix–matrix product. The explicit points × N weights would cost points × N² to
+ * form and no less to apply, so they are never formed for maps.
+ *
+ * <p>K is stored column by column, one array per column, and the product runs over blocks of
+ * {@value #BLOCK} points as a sum of scaled columns, so the inner loop is a contiguous
+ * multiply–add over two distinct arrays that the JIT compiles to vector instructions (one flat
+ * array with offsets measured five times slower), and the block's results stay in the
+ * first-level cache. Immutable and safe to share between threads.
  */
 public final class SplineWeights {
+    static final int BLOCK = 2048;
+
     private final Quantity quantity;
     private final int points;
     private final int channels;
     private final int width;
-    private final float[] rows;
+    private final float[][] columns;
     private final double[][] operator;
 
-    SplineWeights(Quantity quantity, int points, int channels, float[] rows, double[][] operator) {
+    SplineWeights(Quantity quantity, int points, int channels, float[][] columns, double[][] operator) {
         this.quantity = quantity;
         this.points = points;
         this.channels = channels;
         this.width = operator.length;
-        this.rows = rows;
+        this.columns = columns;
         this.operator = operator;
     }
 
@@ -46,10 +53,7 @@ public final class SplineWeights {
             throw new IllegalArgumentException("expected " + channels + " values and room for "
                     + points + " points, got " + values.length + " and " + out.length);
         }
-        float[] b = coefficients(values);
-        for (int p = 0; p < points; p++) {
-            out[p] = dot(rows, p * width, b, width);
-        }
+        multiply(coefficients(values), out);
     }
 
     /** One map in a new array. */
@@ -59,25 +63,41 @@ public final class SplineWeights {
         return out;
     }
 
-    /**
-     * Evaluates many maps at once, {@code out[f][p]} from {@code values[f][channel]}: the
-     * coefficients of all maps first, then one pass over the rows in which each row serves every
-     * map while it sits in the cache.
-     */
+    /** Evaluates many maps at once, {@code out[f][p]} from {@code values[f][channel]}. */
     public void applyAll(double[][] values, float[][] out) {
-        int frames = values.length;
-        float[][] b = new float[frames][];
-        for (int f = 0; f < frames; f++) {
+        for (int f = 0; f < values.length; f++) {
             if (values[f].length != channels || out[f].length < points) {
                 throw new IllegalArgumentException("map " + f + ": expected " + channels
                         + " values and room for " + points + " points");
             }
+        }
+        float[][] b = new float[values.length][];
+        for (int f = 0; f < values.length; f++) {
             b[f] = coefficients(values[f]);
         }
-        for (int p = 0; p < points; p++) {
-            int off = p * width;
-            for (int f = 0; f < frames; f++) {
-                out[f][p] = dot(rows, off, b[f], width);
+        // block by block, so each block of the weights is read once from memory for all maps
+        for (int start = 0; start < points; start += BLOCK) {
+            int end = Math.min(points, start + BLOCK);
+            for (int f = 0; f < values.length; f++) {
+                multiplyBlock(b[f], out[f], start, end);
+            }
+        }
+    }
+
+    /** out = K b. */
+    private void multiply(float[] b, float[] out) {
+        for (int start = 0; start < points; start += BLOCK) {
+            multiplyBlock(b, out, start, Math.min(points, start + BLOCK));
+        }
+    }
+
+    private void multiplyBlock(float[] b, float[] out, int start, int end) {
+        java.util.Arrays.fill(out, start, end, 0f);
+        for (int j = 0; j < width; j++) {
+            float bj = b[j];
+            float[] column = columns[j];
+            for (int p = start; p < end; p++) {
+                out[p] += column[p] * bj;
             }
         }
     }
@@ -94,24 +114,5 @@ public final class SplineWeights {
             b[i] = (float) sum;
         }
         return b;
-    }
-
-    /** A dot product with four independent sums, so the additions overlap in the pipeline. */
-    static float dot(float[] a, int offset, float[] b, int n) {
-        float s0 = 0;
-        float s1 = 0;
-        float s2 = 0;
-        float s3 = 0;
-        int j = 0;
-        for (; j + 3 < n; j += 4) {
-            s0 += a[offset + j] * b[j];
-            s1 += a[offset + j + 1] * b[j + 1];
-            s2 += a[offset + j + 2] * b[j + 2];
-            s3 += a[offset + j + 3] * b[j + 3];
-        }
-        for (; j < n; j++) {
-            s0 += a[offset + j] * b[j];
-        }
-        return (s0 + s1) + (s2 + s3);
     }
 }
