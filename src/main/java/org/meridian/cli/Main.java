@@ -18,6 +18,9 @@ import picocli.CommandLine.Option;
                 + "measures for averaged ERPs.",
         subcommands = {
             MontageCommand.class,
+            CsdCommand.class,
+            RepairCommand.class,
+            MapsCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;

@@ -72,8 +72,16 @@ public final class ChannelRepair {
         return Waveforms.wrap(data.labels(), data.axis(), data.unit(), values);
     }
 
-    /** Every cell of a study with the named channels repaired. */
-    public static Study of(Study study, List<String> channels, SplineParameters parameters) {
+    /** How many positioned channels the repaired ones are interpolated from. */
+    public int sourceChannelCount() {
+        return spline.channelCount();
+    }
+
+    /**
+     * The repair of named channels of a study, after checking that each is a channel of the
+     * study and has a position.
+     */
+    public static ChannelRepair forStudy(Study study, List<String> channels, SplineParameters parameters) {
         for (String label : channels) {
             if (study.waveforms(0, 0).indexOf(label) < 0) {
                 throw new BadInputException(study.name() + " has no channel " + label + " to repair");
@@ -85,8 +93,17 @@ public final class ChannelRepair {
                         + " has no position, so it cannot be repaired");
             }
         }
-        ChannelRepair repair = new ChannelRepair(study.montage(), channels, parameters);
-        return study.mapWaveforms(study.name() + " (repaired " + String.join(", ",
-                repair.repairedChannels()) + ")", (p, c) -> repair.of(study.waveforms(p, c)));
+        return new ChannelRepair(study.montage(), channels, parameters);
+    }
+
+    /** Every cell of the study with the channels repaired. */
+    public Study of(Study study) {
+        return study.mapWaveforms(study.name() + " (repaired " + String.join(", ", repaired) + ")",
+                (p, c) -> of(study.waveforms(p, c)));
+    }
+
+    /** Every cell of a study with the named channels repaired. */
+    public static Study of(Study study, List<String> channels, SplineParameters parameters) {
+        return forStudy(study, channels, parameters).of(study);
     }
 }
