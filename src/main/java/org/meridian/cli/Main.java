@@ -18,6 +18,7 @@ import picocli.CommandLine.Option;
                 + "measures for averaged ERPs.",
         subcommands = {
             MontageCommand.class,
+            InfoCommand.class,
             CsdCommand.class,
             RepairCommand.class,
             MapsCommand.class,
