@@ -33,6 +33,10 @@ final class CsdCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Replace the output folder if it exists and is not empty.")
     boolean force;
 
+    @Option(names = "--decimals", paramLabel = "N", defaultValue = "4",
+            description = "Digits after the decimal point of every written value (default ${DEFAULT-VALUE}).")
+    int decimals;
+
     @Mixin
     SplineOptions spline;
 
@@ -41,7 +45,7 @@ final class CsdCommand implements Callable<Integer> {
         SplineParameters parameters = spline.parameters();
         Study in = StudyLoader.load(study);
         Study csd = SurfaceLaplacian.of(in, parameters);
-        StudyWriter.write(csd, output, new StudyWriter.Options(false, StudyWriter.Options.defaults().decimals(), force));
+        StudyWriter.write(csd, output, new StudyWriter.Options(false, decimals, force));
         PrintWriter out = spec.commandLine().getOut();
         out.println("output: " + output);
         out.println("waveforms: " + in.participants().size() * in.conditions().size());

@@ -37,6 +37,10 @@ final class RepairCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Replace the output folder if it exists and is not empty.")
     boolean force;
 
+    @Option(names = "--decimals", paramLabel = "N", defaultValue = "4",
+            description = "Digits after the decimal point of every written value (default ${DEFAULT-VALUE}).")
+    int decimals;
+
     @Mixin
     SplineOptions spline;
 
@@ -46,7 +50,7 @@ final class RepairCommand implements Callable<Integer> {
         Study in = StudyLoader.load(study);
         ChannelRepair repair = ChannelRepair.forStudy(in, channels, parameters);
         Study repaired = repair.of(in);
-        StudyWriter.write(repaired, output, new StudyWriter.Options(false, StudyWriter.Options.defaults().decimals(), force));
+        StudyWriter.write(repaired, output, new StudyWriter.Options(false, decimals, force));
         PrintWriter out = spec.commandLine().getOut();
         out.println("output: " + output);
         out.println("repaired: " + String.join(", ", repair.repairedChannels()));
