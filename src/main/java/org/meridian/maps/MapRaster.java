@@ -1,6 +1,9 @@
 package org.meridian.maps;
 
+import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
 import java.util.Arrays;
+import org.meridian.core.Unit;
 import org.meridian.spline.Quantity;
 import org.meridian.spline.SphericalSpline;
 import org.meridian.spline.SplineWeights;
@@ -19,6 +22,7 @@ import org.meridian.spline.SplineWeights;
  */
 public final class MapRaster {
     private final MapLayout layout;
+    private final Quantity quantity;
     private final int size;
     private final MapGrid display;
     private final MapGrid coarse;
@@ -44,6 +48,7 @@ public final class MapRaster {
                     + displaySize + " and " + coarseSize);
         }
         this.layout = layout;
+        this.quantity = quantity;
         this.size = displaySize;
         double h = layout.viewHalfWidth();
         this.display = MapGrid.pixels(displaySize, h);
@@ -112,6 +117,35 @@ public final class MapRaster {
     /** The display's pixel grid (pixel centres in plane units). */
     public MapGrid displayGrid() {
         return display;
+    }
+
+    /**
+     * A new ARGB image of the display whose pixels are the array {@link #render(double[],
+     * ColourLimits, int[], BufferedImage)} writes, so a frame needs no copy; draw it with
+     * {@link MapRenderer#drawImage} and {@link #displayGrid()}.
+     */
+    public BufferedImage newImage() {
+        return new BufferedImage(size, size, BufferedImage.TYPE_INT_ARGB);
+    }
+
+    /** Renders straight into an image from {@link #newImage()}. */
+    public void render(double[] channelValues, ColourLimits limits, int[] colourTable, BufferedImage image) {
+        int[] pixels = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
+        render(channelValues, limits, colourTable, pixels);
+    }
+
+    /**
+     * The coarse grid's values as a map (NaN at nodes the display does not need), for contour
+     * lines over the display image; {@code dataUnit} is the unit of the channel values.
+     */
+    public ScalpMap coarseMap(double[] channelValues, Unit dataUnit) {
+        float[] grid = coarseValues(channelValues);
+        float[] values = new float[grid.length];
+        Arrays.fill(values, Float.NaN);
+        for (int node : nodes) {
+            values[node] = grid[node];
+        }
+        return new ScalpMap(layout, coarse, values, quantity.outputUnit(dataUnit), "");
     }
 
     /** How many coarse nodes are evaluated per frame. */

@@ -76,67 +76,93 @@ public final class MapRenderer {
         return image;
     }
 
-    /** Draws the map into the bounds. */
+    /** Draws the map into the bounds: colours, contours (if the style asks), head and electrodes. */
     public static void draw(Graphics2D target, Rectangle2D bounds, ScalpMap map, ColourLimits limits,
             MapStyle style) {
-        Graphics2D g = (Graphics2D) target.create();
-        try {
-            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
-            g.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_BILINEAR);
-            MapLayout layout = map.layout();
-            AffineTransform toDevice = planeToDevice(bounds, layout);
-            double side = Math.min(bounds.getWidth(), bounds.getHeight());
-            double line = Math.max(0.4, side * 0.0045 * style.sizeFactor());
-            Shape clip = toDevice.createTransformedShape(layout.region().outline());
+        drawImage(target, bounds, map.layout(), map.grid(), image(map, limits, style.scale()));
+        if (style.contours()) {
+            drawContours(target, bounds, map, limits, style);
+        }
+        drawHeadAndElectrodes(target, bounds, map.layout(), style);
+    }
 
-            drawColours(g, map, limits, style, toDevice, clip);
-            if (style.contours()) {
-                drawContours(g, map, limits, toDevice, clip, line);
-            }
-            drawHead(g, toDevice, line);
-            drawElectrodes(g, layout, style, toDevice, side);
+    /**
+     * Draws an image whose pixel (column, row) is centred on the grid point (column, row),
+     * clipped to the layout's region: a map's own image, or the display image of a
+     * {@link MapRaster} (whose grid is {@link MapRaster#displayGrid}).
+     */
+    public static void drawImage(Graphics2D target, Rectangle2D bounds, MapLayout layout, MapGrid grid,
+            BufferedImage image) {
+        Graphics2D g = prepared(target);
+        try {
+            AffineTransform toDevice = planeToDevice(bounds, layout);
+            g.clip(toDevice.createTransformedShape(layout.region().outline()));
+            double step = grid.step();
+            AffineTransform place = new AffineTransform(toDevice);
+            // image pixel (0, 0) covers the square around grid point (0, 0); rows run down (−y)
+            place.translate(grid.x(0) - step / 2, grid.y(0) + step / 2);
+            place.scale(step * grid.size() / image.getWidth(), -step * grid.size() / image.getHeight());
+            g.drawImage(image, place, null);
         } finally {
             g.dispose();
         }
     }
 
-    private static void drawColours(Graphics2D g, ScalpMap map, ColourLimits limits, MapStyle style,
-            AffineTransform toDevice, Shape clip) {
-        MapGrid grid = map.grid();
-        BufferedImage image = image(map, limits, style.scale());
-        Shape saved = g.getClip();
-        g.clip(clip);
-        double h = grid.halfWidth();
-        AffineTransform place = new AffineTransform(toDevice);
-        // image pixel (0, 0) starts at the plane's top-left corner (−h, +h); rows run down (−y)
-        place.translate(-h, h);
-        place.scale(2 * h / grid.size(), -2 * h / grid.size());
-        g.drawImage(image, place, null);
-        g.setClip(saved);
+    /**
+     * Draws the map's contour lines at the limits' contour step, clipped to its region: the zero
+     * line thicker and darker, negative levels dashed.
+     */
+    public static void drawContours(Graphics2D target, Rectangle2D bounds, ScalpMap map, ColourLimits limits,
+            MapStyle style) {
+        Graphics2D g = prepared(target);
+        try {
+            AffineTransform toDevice = planeToDevice(bounds, map.layout());
+            g.clip(toDevice.createTransformedShape(map.layout().region().outline()));
+            double line = lineWidth(bounds, style);
+            float thin = (float) (0.6 * line);
+            BasicStroke positive = new BasicStroke(thin, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+            BasicStroke negative = new BasicStroke(thin, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10,
+                    new float[] {3 * thin, 2.5f * thin}, 0);
+            BasicStroke zero = new BasicStroke((float) (1.3 * line), BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+            for (Contours.Line c : Contours.atSteps(map, limits.contourStep())) {
+                Shape path = toDevice.createTransformedShape(c.path());
+                if (c.zero()) {
+                    g.setColor(ZERO_LINE);
+                    g.setStroke(zero);
+                } else {
+                    g.setColor(CONTOUR);
+                    g.setStroke(c.level() > 0 ? positive : negative);
+                }
+                g.draw(path);
+            }
+        } finally {
+            g.dispose();
+        }
     }
 
-    private static void drawContours(Graphics2D g, ScalpMap map, ColourLimits limits,
-            AffineTransform toDevice, Shape clip, double line) {
-        Shape saved = g.getClip();
-        g.clip(clip);
-        float thin = (float) (0.6 * line);
-        BasicStroke positive = new BasicStroke(thin, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
-        BasicStroke negative = new BasicStroke(thin, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10,
-                new float[] {3 * thin, 2.5f * thin}, 0);
-        BasicStroke zero = new BasicStroke((float) (1.3 * line), BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
-        for (Contours.Line c : Contours.atSteps(map, limits.contourStep())) {
-            Shape path = toDevice.createTransformedShape(c.path());
-            if (c.zero()) {
-                g.setColor(ZERO_LINE);
-                g.setStroke(zero);
-            } else {
-                g.setColor(CONTOUR);
-                g.setStroke(c.level() > 0 ? positive : negative);
-            }
-            g.draw(path);
+    /** Draws the head outline with nose and ears, the electrode markers, labels and highlights. */
+    public static void drawHeadAndElectrodes(Graphics2D target, Rectangle2D bounds, MapLayout layout, MapStyle style) {
+        Graphics2D g = prepared(target);
+        try {
+            AffineTransform toDevice = planeToDevice(bounds, layout);
+            drawHead(g, toDevice, lineWidth(bounds, style));
+            drawElectrodes(g, layout, style, toDevice, Math.min(bounds.getWidth(), bounds.getHeight()));
+        } finally {
+            g.dispose();
         }
-        g.setClip(saved);
+    }
+
+    private static Graphics2D prepared(Graphics2D target) {
+        Graphics2D g = (Graphics2D) target.create();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
+        g.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_BILINEAR);
+        return g;
+    }
+
+    private static double lineWidth(Rectangle2D bounds, MapStyle style) {
+        return Math.max(0.4, Math.min(bounds.getWidth(), bounds.getHeight()) * 0.0045 * style.sizeFactor());
     }
 
     private static void drawHead(Graphics2D g, AffineTransform toDevice, double line) {

@@ -84,4 +84,37 @@ class MapRasterTest {
         assertThat((leftEdge >> 16) & 0xff).isGreaterThan(leftEdge & 0xff);
         assertThat(rightEdge & 0xff).isGreaterThan((rightEdge >> 16) & 0xff);
     }
+
+    @Test
+    void windowPathDrawsTheRasterWithHeadAndContoursOntoAnyGraphics() {
+        Montage m = StandardSystem.TEN_TEN.montage();
+        SphericalSpline spline = SphericalSpline.fit(m, SplineParameters.defaults());
+        MapLayout layout = new MapLayout(m, MapExtent.electrodes());
+        MapRaster raster = new MapRaster(spline, Quantity.POTENTIAL, layout, 160, 64);
+        double[] v = TestFields.dipolar(10, 0, 1, 0).on(m);
+        java.awt.image.BufferedImage frame = raster.newImage();
+        ColourLimits limits = ColourLimits.symmetric(10);
+        raster.render(v, limits, ColourScales.DIVERGING.argbTable(512), frame);
+
+        java.awt.image.BufferedImage screen = new java.awt.image.BufferedImage(200, 200, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g = screen.createGraphics();
+        g.setColor(java.awt.Color.WHITE);
+        g.fillRect(0, 0, 200, 200);
+        java.awt.geom.Rectangle2D bounds = new java.awt.geom.Rectangle2D.Double(0, 0, 200, 200);
+        MapRenderer.drawImage(g, bounds, layout, raster.displayGrid(), frame);
+        ScalpMap contours = raster.coarseMap(v, org.meridian.core.Unit.MICROVOLT);
+        MapRenderer.drawContours(g, bounds, contours, limits, MapStyle.defaults());
+        MapRenderer.drawHeadAndElectrodes(g, bounds, layout, MapStyle.defaults().withMarkers(false));
+        g.dispose();
+        java.awt.geom.AffineTransform t = MapRenderer.planeToDevice(bounds, layout);
+        java.awt.geom.Point2D front = t.transform(new java.awt.geom.Point2D.Double(0.35, 0.6), null);
+        java.awt.geom.Point2D back = t.transform(new java.awt.geom.Point2D.Double(0.35, -0.6), null);
+        int top = screen.getRGB((int) front.getX(), (int) front.getY());
+        int bottom = screen.getRGB((int) back.getX(), (int) back.getY());
+        // a dipole toward the nose (DESIGN §8, V ∝ r·d) is warm at the top of the map (DESIGN §3, nose up)
+        assertThat((top >> 16) & 0xff).isGreaterThan((top & 0xff) + 40);
+        assertThat(bottom & 0xff).isGreaterThan(((bottom >> 16) & 0xff) + 40);
+        // the coarse map's contours include the zero line across the middle
+        assertThat(Contours.atSteps(contours, limits.contourStep())).anyMatch(Contours.Line::zero);
+    }
 }
