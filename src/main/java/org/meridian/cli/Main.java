@@ -19,6 +19,7 @@ import picocli.CommandLine.Option;
         subcommands = {
             MontageCommand.class,
             InfoCommand.class,
+            SimulateCommand.class,
             CsdCommand.class,
             RepairCommand.class,
             MapsCommand.class,
