@@ -30,6 +30,8 @@ public final class MapRegion {
     /** R(φ) + margin at φ = 2πk / ANGLES. */
     private final double[] rim;
     private final double margin;
+    private final double innermost;
+    private final double outermost;
 
     private MapRegion(double cx, double cy, double[] rim, double margin) {
         if (!(margin >= 0) || !Double.isFinite(margin)) {
@@ -39,6 +41,14 @@ public final class MapRegion {
         this.cy = cy;
         this.rim = rim;
         this.margin = margin;
+        double lo = Double.MAX_VALUE;
+        double hi = 0;
+        for (double r : rim) {
+            lo = Math.min(lo, r);
+            hi = Math.max(hi, r);
+        }
+        this.innermost = lo;
+        this.outermost = hi;
     }
 
     /** The disk of this radius about the centre (Cz). */
@@ -55,10 +65,14 @@ public final class MapRegion {
         }
         double[][] hull = convexHull(points);
         double[] centre = insideOrigin(hull) ? new double[] {0, 0} : centroid(hull);
+        double[] angles = new double[hull.length];
+        for (int i = 0; i < hull.length; i++) {
+            angles[i] = Math.atan2(hull[i][1] - centre[1], hull[i][0] - centre[0]);
+        }
         double[] rim = new double[ANGLES];
         for (int k = 0; k < ANGLES; k++) {
             double phi = 2 * Math.PI * k / ANGLES;
-            rim[k] = hullRadius(hull, centre, phi) + margin;
+            rim[k] = hullRadius(hull, angles, centre, phi) + margin;
         }
         return new MapRegion(centre[0], centre[1], rim, margin);
     }
@@ -76,7 +90,14 @@ public final class MapRegion {
     public boolean contains(double x, double y, double extra) {
         double dx = x - cx;
         double dy = y - cy;
-        return Math.hypot(dx, dy) <= rimAt(Math.atan2(dy, dx)) + extra;
+        double r = Math.sqrt(dx * dx + dy * dy);
+        if (r <= innermost + extra) {
+            return true;
+        }
+        if (r > outermost + extra) {
+            return false;
+        }
+        return r <= rimAt(Math.atan2(dy, dx)) + extra;
     }
 
     /** R(φ) + margin: the distance from the centre to the rim in direction φ. */
@@ -120,7 +141,7 @@ public final class MapRegion {
      * The hull's radius about {@code c} in direction φ: the larger of the straight edge's
      * distance and the interpolation in angle and radius between the edge's two vertices.
      */
-    private static double hullRadius(double[][] hull, double[] c, double phi) {
+    private static double hullRadius(double[][] hull, double[] angles, double[] c, double phi) {
         int n = hull.length;
         if (n == 1) {
             return Math.hypot(hull[0][0] - c[0], hull[0][1] - c[1]);
@@ -135,8 +156,8 @@ public final class MapRegion {
             double ay = a[1] - c[1];
             double bx = b[0] - c[0];
             double by = b[1] - c[1];
-            double pa = Math.atan2(ay, ax);
-            double sweep = angleBetween(pa, Math.atan2(by, bx));
+            double pa = angles[i];
+            double sweep = angleBetween(pa, angles[(i + 1) % n]);
             double along = angleBetween(pa, phi);
             if (sweep <= 0 || along < 0 || along > sweep) {
                 continue;
