@@ -19,7 +19,7 @@ import org.meridian.core.Waveforms;
 import org.meridian.testing.StudyFixtures;
 
 /** Any linear combination, however it is written, evaluates to what it means. */
-class ConditionExpressionProperties {
+class ConditionExpressionPropertyTest {
     private static final List<String> CONDITIONS = List.of("rare", "common", "go left", "it's");
     private static final TimeAxis AXIS = new TimeAxis(0, 100, 20);
 
