@@ -63,7 +63,7 @@ final class LocalPeakMeasure implements Measure {
     }
 
     /** After this many candidates the side sums come from running totals instead of loops. */
-    private static final int DIRECT_CHECKS = 4;
+    private static final int DIRECT_CHECKS = 32;
     /** Running totals are kept in one buffer per thread, so scoring allocates nothing. */
     private static final ThreadLocal<double[]> TOTALS = ThreadLocal.withInitial(() -> new double[0]);
 
