@@ -1,5 +1,7 @@
 package org.meridian.measure;
 
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -10,9 +12,11 @@ import org.meridian.core.Unit;
 import org.meridian.core.Waveforms;
 import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.TimeWindow;
+import org.openjdk.jmh.annotations.AuxCounters;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
@@ -29,6 +33,10 @@ import org.openjdk.jmh.annotations.Warmup;
  * background noise (a first-order autoregressive series, ρ = 0.98 at 1 kHz, about 1 µV SD), as
  * averaging and the recording's anti-alias filter leave it. {@code whiteNoise} runs the same on
  * sample-to-sample independent noise, the worst case for the branches in the local peak.
+ *
+ * <p>On a shared machine the wall time per call also counts the time other processes held the
+ * core, so the {@code cpu} counters give the benchmark thread's own CPU time: CPU ms per call =
+ * cpuMillis / calls (both summed over the iteration).
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -44,6 +52,30 @@ public class MeasureBench {
     private Study study;
     private MeasureRequest everyMeasure;
     private MeasureRequest withGrandAndJackknife;
+
+    /** The benchmark thread's CPU time and the number of calls, per iteration. */
+    @State(Scope.Thread)
+    @AuxCounters(AuxCounters.Type.EVENTS)
+    public static class Cpu {
+        private static final ThreadMXBean THREADS = ManagementFactory.getThreadMXBean();
+        public double cpuMillis;
+        public double calls;
+
+        @Setup(Level.Iteration)
+        public void reset() {
+            cpuMillis = 0;
+            calls = 0;
+        }
+
+        long now() {
+            return THREADS.getCurrentThreadCpuTime();
+        }
+
+        void add(long startNs) {
+            cpuMillis += (now() - startNs) / 1e6;
+            calls++;
+        }
+    }
 
     @Setup
     public void setUp() {
@@ -86,12 +118,18 @@ public class MeasureBench {
     }
 
     @Benchmark
-    public MeasureTable everyMeasure() {
-        return Measurement.run(study, everyMeasure);
+    public MeasureTable everyMeasure(Cpu cpu) {
+        long start = cpu.now();
+        MeasureTable table = Measurement.run(study, everyMeasure);
+        cpu.add(start);
+        return table;
     }
 
     @Benchmark
-    public MeasureTable everyMeasureWithGrandAndJackknife() {
-        return Measurement.run(study, withGrandAndJackknife);
+    public MeasureTable everyMeasureWithGrandAndJackknife(Cpu cpu) {
+        long start = cpu.now();
+        MeasureTable table = Measurement.run(study, withGrandAndJackknife);
+        cpu.add(start);
+        return table;
     }
 }
