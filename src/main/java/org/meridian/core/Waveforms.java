@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 
 /**
  * Channels × samples of one participant and condition (or of a grand average): unique channel
@@ -112,6 +113,23 @@ public final class Waveforms {
         int n = axis.samples();
         int off = channel * n;
         for (int s = 0; s < n; s++) {
+            dst[s] = values[off + s];
+        }
+    }
+
+    /**
+     * Copies samples {@code firstSample .. firstSample + dst.length − 1} of one channel into
+     * {@code dst} as doubles: one bounds check and a plain loop over the channel's run, for
+     * measures that read a window of every channel of many participants.
+     *
+     * @throws IndexOutOfBoundsException when the channel or the span lies outside the data
+     */
+    public void channelInto(int channel, int firstSample, double[] dst) {
+        int n = axis.samples();
+        Objects.checkIndex(channel, labels.size());
+        Objects.checkFromIndexSize(firstSample, dst.length, n);
+        int off = channel * n + firstSample;
+        for (int s = 0; s < dst.length; s++) {
             dst[s] = values[off + s];
         }
     }

@@ -74,21 +74,18 @@ public record Region(String label, List<String> channels) {
      * {@code dst}, given its channel indices.
      */
     public static void meanInto(Waveforms w, int[] indices, int first, double[] dst) {
-        int n = dst.length;
-        int c0 = indices[0];
-        for (int s = 0; s < n; s++) {
-            dst[s] = w.value(c0, first + s);
-        }
+        w.channelInto(indices[0], first, dst);
         if (indices.length == 1) {
             return;
         }
+        double[] other = new double[dst.length];
         for (int k = 1; k < indices.length; k++) {
-            int c = indices[k];
-            for (int s = 0; s < n; s++) {
-                dst[s] += w.value(c, first + s);
+            w.channelInto(indices[k], first, other);
+            for (int s = 0; s < dst.length; s++) {
+                dst[s] += other[s];
             }
         }
-        for (int s = 0; s < n; s++) {
+        for (int s = 0; s < dst.length; s++) {
             dst[s] /= indices.length;
         }
     }
