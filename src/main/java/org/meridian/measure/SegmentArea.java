@@ -42,39 +42,17 @@ final class SegmentArea {
     }
 
     /**
-     * The area of the chosen part over samples from..to of x. The trapezoid sums are sums over
-     * samples with the two end samples halved (Σ_i (x_i + x_{i+1})/2 = Σ x − (x_from + x_to)/2),
-     * and x⁺ = (x + |x|)/2; the crossings' overshoot is a separate, rarely branching loop.
+     * The area of the chosen part over samples from..to of x, from the window's one-pass sums
+     * ({@link WindowScan}). The trapezoid sums are sums over samples with the two end samples
+     * halved (Σ_i (x_i + x_{i+1})/2 = Σ x − (x_from + x_to)/2), and x⁺ = (x + |x|)/2; the
+     * crossings' overshoot is subtracted from the clipped trapezoids.
      */
-    static double sum(double[] x, int from, int to, double dt, Polarity polarity) {
-        double sum0 = 0;
-        double sum1 = 0;
-        double abs0 = 0;
-        double abs1 = 0;
-        int i = from;
-        for (; i + 1 <= to; i += 2) {
-            double a = x[i];
-            double b = x[i + 1];
-            sum0 += a;
-            sum1 += b;
-            abs0 += Math.abs(a);
-            abs1 += Math.abs(b);
-        }
-        if (i == to) {
-            sum0 += x[i];
-            abs0 += Math.abs(x[i]);
-        }
+    static double sum(WindowScan scan, double[] x, int from, int to, double dt, Polarity polarity) {
         double ends = 0.5 * (x[from] + x[to]);
-        double signed = (sum0 + sum1) - ends;
-        double clipped = 0.5 * ((sum0 + sum1) + (abs0 + abs1)) - 0.5 * (ends + 0.5 * (Math.abs(x[from]) + Math.abs(x[to])));
-        double overshoot = 0;
-        for (int j = from; j < to; j++) {
-            double ab = x[j] * x[j + 1];
-            if (ab < 0) {
-                overshoot -= ab / Math.abs(x[j] - x[j + 1]);
-            }
-        }
-        double positive = (clipped - 0.5 * overshoot) * dt;
+        double signed = (scan.evenSum + scan.oddSum) - ends;
+        double clipped = 0.5 * ((scan.evenSum + scan.oddSum) + (scan.evenAbs + scan.oddAbs))
+                - 0.5 * (ends + 0.5 * (Math.abs(x[from]) + Math.abs(x[to])));
+        double positive = (clipped - 0.5 * scan.overshoot) * dt;
         return switch (polarity) {
             case SIGNED -> signed * dt;
             case POSITIVE -> positive;

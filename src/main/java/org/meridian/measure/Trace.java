@@ -7,9 +7,9 @@ import org.meridian.core.TimeAxis;
  * window), and the window as an inclusive sample range {@code from..to} on its axis.
  *
  * <p>The array is not copied: a trace is a short-lived view handed to measures, which must not
- * change it. Results that several measures share (the extreme sample, the local peak, the area)
- * are computed once per trace and remembered, so scoring every measure on one trace does not
- * repeat the same scans.
+ * change it. Results that several measures share (the window's sums, see {@link WindowScan},
+ * its extremes and the local peak) are computed once per trace and remembered, so scoring every
+ * measure on one trace does not repeat the same scans.
  */
 public final class Trace {
     private final double[] values;
@@ -17,13 +17,13 @@ public final class Trace {
     private final int from;
     private final int to;
 
-    private Polarity extremeFor;
-    private int extreme;
+    private WindowScan scan;
+    /** The first largest and first smallest window samples, −1 until scanned. */
+    private int maxIndex = -1;
+    private int minIndex = -1;
     private Polarity localFor;
     private int localK;
     private int local;
-    private Polarity areaFor;
-    private double area;
 
     public Trace(double[] values, TimeAxis axis, int from, int to) {
         if (values.length != axis.samples()) {
@@ -72,21 +72,36 @@ public final class Trace {
      * most positive sample for positive polarity, the most negative for negative polarity.
      */
     public int extremeIndex(Polarity polarity) {
-        if (extremeFor != polarity) {
-            int sign = polarity.sign();
-            int best = from;
-            double bestValue = sign * values[from];
-            for (int i = from + 1; i <= to; i++) {
-                double v = sign * values[i];
-                if (v > bestValue) {
-                    bestValue = v;
-                    best = i;
-                }
+        // only the extreme asked for is searched: each one's updates are mispredicted branches
+        if (polarity == Polarity.NEGATIVE) {
+            if (minIndex < 0) {
+                minIndex = firstExtreme(-1);
             }
-            extreme = best;
-            extremeFor = polarity;
+            return minIndex;
         }
-        return extreme;
+        if (maxIndex < 0) {
+            maxIndex = firstExtreme(1);
+        }
+        return maxIndex;
+    }
+
+    private int firstExtreme(int sign) {
+        int best = from;
+        double bestValue = values[from];
+        for (int i = from + 1; i <= to; i++) {
+            double v = values[i];
+            if (sign > 0 ? v > bestValue : v < bestValue) {
+                bestValue = v;
+                best = i;
+            }
+        }
+        return best;
+    }
+
+    /** The mean of the window's samples, ends included. */
+    double windowMean() {
+        WindowScan s = scan();
+        return (s.evenSum + s.oddSum) / (to - from + 1);
     }
 
     /** The local peak's sample index with a neighbourhood of k samples, or −1 when none qualifies. */
@@ -101,10 +116,14 @@ public final class Trace {
 
     /** The window's area of the chosen part of the wave, in µV·ms (see {@link AreaMeasure}). */
     double area(Polarity polarity) {
-        if (areaFor != polarity) {
-            area = SegmentArea.sum(values, from, to, stepMs(), polarity);
-            areaFor = polarity;
+        return SegmentArea.sum(scan(), values, from, to, stepMs(), polarity);
+    }
+
+    /** The window's shared one-pass results, scanned on first use. */
+    private WindowScan scan() {
+        if (scan == null) {
+            scan = WindowScan.of(values, from, to);
         }
-        return area;
+        return scan;
     }
 }

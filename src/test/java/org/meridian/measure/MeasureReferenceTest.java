@@ -14,15 +14,33 @@ import org.meridian.core.TimeAxis;
 class MeasureReferenceTest {
     private static final TimeAxis AXIS = new TimeAxis(-100, 500, 200);
 
-    /** Smooth, jagged, or jagged on a steep slope (where most local maxima fail the side means). */
+    /**
+     * Smooth, jagged, jagged on a steep slope (where most local maxima fail the side means), or
+     * smooth rounded to whole µV (ties, flat runs and exact zeros, where "first on ties" and the
+     * strict comparisons matter).
+     */
     private static double[] wave(Random random, int kind) {
         double[] x = new double[AXIS.samples()];
         double ar = 0;
         for (int i = 0; i < x.length; i++) {
-            ar = kind == 0 ? 0.9 * ar + random.nextGaussian() : random.nextGaussian();
+            ar = kind == 0 || kind == 3 ? 0.9 * ar + random.nextGaussian() : random.nextGaussian();
             x[i] = ar + (random.nextBoolean() ? 0.5 : -0.5) * Math.sin(i / 7.0) + (kind == 2 ? 0.4 * i : 0);
+            if (kind == 3) {
+                x[i] = Math.rint(x[i]);
+            }
         }
         return x;
+    }
+
+    /** DESIGN §6.3 read literally: the first window sample with the largest sign·x. */
+    private static int extremeByDefinition(double[] x, int from, int to, int sign) {
+        int best = from;
+        for (int i = from; i <= to; i++) {
+            if (sign * x[i] > sign * x[best]) {
+                best = i;
+            }
+        }
+        return best;
     }
 
     /** DESIGN §6.3 read literally, one sample at a time. */
@@ -74,7 +92,7 @@ class MeasureReferenceTest {
     void theLocalPeakLoopFindsWhatTheDefinitionFinds() {
         Random random = new Random(17);
         for (int trial = 0; trial < 400; trial++) {
-            double[] x = wave(random, trial % 3);
+            double[] x = wave(random, trial % 4);
             int from = random.nextInt(150);
             int to = from + random.nextInt(AXIS.samples() - from);
             int k = 1 + random.nextInt(15);
@@ -89,7 +107,7 @@ class MeasureReferenceTest {
     void theAreaLoopMatchesTheExactIntegralOfEachPart() {
         Random random = new Random(5);
         for (int trial = 0; trial < 400; trial++) {
-            double[] x = wave(random, trial % 3);
+            double[] x = wave(random, trial % 4);
             int from = random.nextInt(150);
             int to = from + random.nextInt(AXIS.samples() - from);
             double dt = AXIS.stepMs();
@@ -104,6 +122,30 @@ class MeasureReferenceTest {
             assertThat(t.area(Polarity.NEGATIVE)).isCloseTo(negative, within(1e-9));
             // positive and negative parts make up the signed wave (textbook identity)
             assertThat(t.area(Polarity.SIGNED)).isCloseTo(positive + negative, within(1e-9));
+        }
+    }
+
+    @Test
+    void theSharedScansFindWhatTheDefinitionsFind() {
+        Random random = new Random(23);
+        for (int trial = 0; trial < 400; trial++) {
+            double[] x = wave(random, trial % 4);
+            int from = random.nextInt(150);
+            int to = from + random.nextInt(AXIS.samples() - from);
+            Trace t = new Trace(x, AXIS, from, to);
+            double sum = 0;
+            for (int i = from; i <= to; i++) {
+                sum += x[i];
+            }
+            // the mean by its definition, summed in plain order
+            assertThat(Measures.byName("mean").score(t, MeasureSettings.defaults()).value())
+                    .isCloseTo(sum / (to - from + 1), within(1e-12));
+            // ask in either order: each polarity's extreme is remembered separately
+            boolean negativeFirst = random.nextBoolean();
+            for (Polarity p : negativeFirst ? new Polarity[] {Polarity.NEGATIVE, Polarity.POSITIVE}
+                    : new Polarity[] {Polarity.POSITIVE, Polarity.NEGATIVE}) {
+                assertThat(t.extremeIndex(p)).isEqualTo(extremeByDefinition(x, from, to, p.sign()));
+            }
         }
     }
 }
