@@ -20,7 +20,8 @@ public record MeasureTable(List<Row> rows, List<Warning> warnings) {
             "measure", "window_ms", "value", "unit");
 
     public MeasureTable {
-        rows = List.copyOf(rows);
+        // the runner's rows come column by column, already immutable; others are copied
+        rows = rows instanceof RowColumns ? rows : List.copyOf(rows);
         warnings = List.copyOf(warnings);
     }
 

@@ -30,7 +30,7 @@ public final class Measurement {
     }
 
     public static MeasureTable run(Study study, MeasureRequest request) {
-        List<MeasureTable.Row> rows = new ArrayList<>();
+        RowColumns.Builder rows = new RowColumns.Builder(expectedRows(study, request));
         List<MeasureTable.Warning> warnings = new ArrayList<>();
         List<Integer> included = new ArrayList<>();
         for (int p = 0; p < study.participants().size(); p++) {
@@ -41,7 +41,17 @@ public final class Measurement {
         for (ConditionWave condition : request.conditions()) {
             new ConditionRun(study, request, condition, included, rows, warnings).run();
         }
-        return new MeasureTable(rows, warnings);
+        return new MeasureTable(rows.build(), warnings);
+    }
+
+    /** The row count when every condition wave has the study's channels (lateralised waves have fewer). */
+    private static int expectedRows(Study study, MeasureRequest request) {
+        int participants = study.participants().size();
+        int perCell = participants + (request.jackknife() ? participants : 0) + (request.grand() ? 1 : 0);
+        int channels = request.channels().isEmpty() ? study.channelLabels().size() : request.channels().size();
+        long rows = (long) request.conditions().size() * channels * request.windows().size()
+                * request.measures().size() * perCell;
+        return (int) Math.min(rows, 1 << 26);
     }
 
     /** The work for one condition wave. */
@@ -50,11 +60,13 @@ public final class Measurement {
         private final MeasureRequest request;
         private final ConditionWave condition;
         private final List<Integer> included;
-        private final List<MeasureTable.Row> rows;
+        private final RowColumns.Builder rows;
         private final List<MeasureTable.Warning> warnings;
+        /** The participants' names as row texts, in the order of {@code included}. */
+        private final int[] participantText;
 
         ConditionRun(Study study, MeasureRequest request, ConditionWave condition,
-                List<Integer> included, List<MeasureTable.Row> rows,
+                List<Integer> included, RowColumns.Builder rows,
                 List<MeasureTable.Warning> warnings) {
             this.study = study;
             this.request = request;
@@ -62,6 +74,10 @@ public final class Measurement {
             this.included = included;
             this.rows = rows;
             this.warnings = warnings;
+            this.participantText = new int[included.size()];
+            for (int i = 0; i < participantText.length; i++) {
+                participantText[i] = rows.text(study.participants().get(included.get(i)));
+            }
         }
 
         void run() {
@@ -99,12 +115,23 @@ public final class Measurement {
                 throw new BadInputException(
                         "the jackknife needs at least two participants");
             }
-            double[][] series = new double[n][axis.samples()];
+            // the grand average and the jackknife need every participant's series at once;
+            // without them one buffer serves every participant and stays in the first-level cache
+            boolean keepSeries = request.grand() || request.jackknife();
+            double[][] series = new double[keepSeries ? n : 1][axis.samples()];
             double[][] leaveOneOut = request.jackknife() ? new double[n][axis.samples()] : null;
+            List<Measure> measures = request.measures();
+            Score[][][] scores = new Score[ranges.size()][n][];
             for (Region region : regions) {
                 int[] idx = region.indices(waves[0]);
+                // each participant's series is scored right after it is taken out, while in cache
                 for (int i = 0; i < n; i++) {
-                    Region.meanInto(waves[i], idx, first, series[i]);
+                    double[] x = series[keepSeries ? i : 0];
+                    Region.meanInto(waves[i], idx, first, x);
+                    for (int w = 0; w < ranges.size(); w++) {
+                        TimeWindow.SampleRange r = ranges.get(w);
+                        scores[w][i] = scoreAll(measures, new Trace(x, axis, r.from(), r.to()));
+                    }
                 }
                 double[] grand = request.grand() ? weightedMean(series, weights) : null;
                 if (leaveOneOut != null) {
@@ -113,34 +140,26 @@ public final class Measurement {
                 for (int w = 0; w < ranges.size(); w++) {
                     TimeWindow window = request.windows().get(w);
                     TimeWindow.SampleRange r = ranges.get(w);
-                    Trace[] traces = new Trace[n];
-                    for (int i = 0; i < n; i++) {
-                        traces[i] = new Trace(series[i], axis, r.from(), r.to());
-                    }
-                    Trace[] subsamples = null;
+                    Score[][] subsampleScores = null;
                     if (leaveOneOut != null) {
-                        subsamples = new Trace[n];
+                        subsampleScores = new Score[n][];
                         for (int i = 0; i < n; i++) {
-                            subsamples[i] = new Trace(leaveOneOut[i], axis, r.from(), r.to());
+                            subsampleScores[i] = scoreAll(measures, new Trace(leaveOneOut[i], axis, r.from(), r.to()));
                         }
                     }
                     Trace grandTrace = grand == null ? null : new Trace(grand, axis, r.from(), r.to());
-                    // score participant by participant, so each trace stays in cache for every
-                    // measure; rows are then written measure by measure
-                    List<Measure> measures = request.measures();
-                    Score[][] scores = scoreAll(measures, traces);
-                    Score[][] subsampleScores = subsamples == null ? null : scoreAll(measures, subsamples);
+                    // rows are written measure by measure
                     for (int m = 0; m < measures.size(); m++) {
                         Measure measure = measures.get(m);
                         Cell cell = new Cell(region.label(), measure, window, measure.unit(waves[0].unit()));
                         for (int i = 0; i < n; i++) {
-                            add(cell, study.participants().get(included.get(i)), scores[i][m]);
+                            add(cell, i, scores[w][i][m]);
                         }
                         if (subsampleScores != null) {
                             jackknife(cell, subsampleScores, m);
                         }
                         if (grandTrace != null) {
-                            add(cell, MeasureTable.GRAND, measure.score(grandTrace, request.settings()));
+                            add(cell, -1, measure.score(grandTrace, request.settings()));
                         }
                     }
                 }
@@ -175,12 +194,11 @@ public final class Measurement {
             return Math.min(full.samples() - 1, last + reach(full));
         }
 
-        private Score[][] scoreAll(List<Measure> measures, Trace[] traces) {
-            Score[][] out = new Score[traces.length][measures.size()];
-            for (int i = 0; i < traces.length; i++) {
-                for (int m = 0; m < measures.size(); m++) {
-                    out[i][m] = measures.get(m).score(traces[i], request.settings());
-                }
+        /** Every measure on one trace, so the trace stays in cache and its shared scans are reused. */
+        private Score[] scoreAll(List<Measure> measures, Trace trace) {
+            Score[] out = new Score[measures.size()];
+            for (int m = 0; m < out.length; m++) {
+                out[m] = measures.get(m).score(trace, request.settings());
             }
             return out;
         }
@@ -206,7 +224,7 @@ public final class Measurement {
                 warn(cell, "jackknife", "the average without " + list(emptyFor) + " has no value,"
                         + " so no retrieved score can be formed; values left empty");
                 for (int i = 0; i < n; i++) {
-                    row(cell, study.participants().get(included.get(i)), null, true, Double.NaN);
+                    row(cell, participantText[i], null, true, Double.NaN);
                 }
                 return;
             }
@@ -216,23 +234,26 @@ public final class Measurement {
             }
             double[] retrieved = Jackknife.retrieve(scores);
             for (int i = 0; i < n; i++) {
-                row(cell, study.participants().get(included.get(i)), qualifier, true, retrieved[i]);
+                row(cell, participantText[i], qualifier, true, retrieved[i]);
             }
         }
 
-        private void add(Cell cell, String participant, Score s) {
+        /** A row for participant {@code i} of {@code included}, or for the grand average when −1. */
+        private void add(Cell cell, int i, Score s) {
             if (s.warning() != null) {
-                warn(cell, participant, s.warning());
+                warn(cell, i < 0 ? MeasureTable.GRAND : study.participants().get(included.get(i)), s.warning());
             }
-            row(cell, participant, s.qualifier(), false, s.value());
+            row(cell, i < 0 ? rows.text(MeasureTable.GRAND) : participantText[i], s.qualifier(), false, s.value());
         }
 
-        private void row(Cell cell, String participant, String qualifier, boolean jackknife, double value) {
-            String measure = qualifier == null ? (jackknife ? cell.jackknifeName : cell.measure.name())
-                    : cell.measure.name() + " (" + qualifier + ")"
-                            + (jackknife ? MeasureTable.JACKKNIFE_SUFFIX : "");
-            rows.add(new MeasureTable.Row(participant, condition.name(), cell.channel, measure,
-                    cell.window, value, cell.unit));
+        private void row(Cell cell, int participant, String qualifier, boolean jackknife, double value) {
+            if (cell.group < 0) {
+                cell.group = rows.group(condition.name(), cell.channel, cell.window, cell.unit);
+            }
+            int measure = qualifier == null ? (jackknife ? cell.jackknifeText(rows) : cell.nameText(rows))
+                    : rows.text(cell.measure.name() + " (" + qualifier + ")"
+                            + (jackknife ? MeasureTable.JACKKNIFE_SUFFIX : ""));
+            rows.add(participant, cell.group, measure, value);
         }
 
         private void warn(Cell cell, String participant, String message) {
@@ -262,20 +283,35 @@ public final class Measurement {
         }
     }
 
-    /** What the rows of one channel, measure and window share. */
+    /** What the rows of one channel, measure and window share, with their row texts once known. */
     private static final class Cell {
         final String channel;
         final Measure measure;
         final TimeWindow window;
         final String unit;
-        final String jackknifeName;
+        int group = -1;
+        private int nameText = -1;
+        private int jackknifeText = -1;
 
         Cell(String channel, Measure measure, TimeWindow window, String unit) {
             this.channel = channel;
             this.measure = measure;
             this.window = window;
             this.unit = unit;
-            this.jackknifeName = measure.name() + MeasureTable.JACKKNIFE_SUFFIX;
+        }
+
+        int nameText(RowColumns.Builder rows) {
+            if (nameText < 0) {
+                nameText = rows.text(measure.name());
+            }
+            return nameText;
+        }
+
+        int jackknifeText(RowColumns.Builder rows) {
+            if (jackknifeText < 0) {
+                jackknifeText = rows.text(measure.name() + MeasureTable.JACKKNIFE_SUFFIX);
+            }
+            return jackknifeText;
         }
     }
 }

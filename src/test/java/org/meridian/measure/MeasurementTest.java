@@ -179,4 +179,40 @@ class MeasurementTest {
                 .excluded(Set.of("p09")).build()))
                 .hasMessageContaining("no such participant");
     }
+
+    @Test
+    void participantRowsDoNotDependOnTheGrandAndJackknifeRows() {
+        // with neither, one series buffer serves every participant; with them, all are kept
+        Study study = StudyFixtures.randomStudy(4, List.of("rare", "common"), List.of("P3", "Pz", "P4"), AXIS, 3);
+        MeasureRequest.Builder plain = request(study, "rare - common").window(TimeWindow.parse("0:150"))
+                .channel("Pz").channel("P3+P4");
+        MeasureRequest.Builder extras = request(study, "rare - common").window(TimeWindow.parse("0:150"))
+                .channel("Pz").channel("P3+P4").grand(true).jackknife(true);
+        for (Measure m : Measures.all()) {
+            plain.measure(m);
+            extras.measure(m);
+        }
+        List<MeasureTable.Row> without = Measurement.run(study, plain.build()).rows();
+        List<MeasureTable.Row> with = Measurement.run(study, extras.build()).rows().stream()
+                .filter(r -> !r.participant().equals(MeasureTable.GRAND) && !r.measure().endsWith(MeasureTable.JACKKNIFE_SUFFIX))
+                .toList();
+        // 2 channels × 2 windows × 8 measures × 4 participants
+        assertThat(without).hasSize(128).isEqualTo(with);
+        assertThat(without.get(0)).isEqualTo(with.get(0));
+    }
+
+    @Test
+    void theRowsAreAReadOnlyListEqualToItsRowsOneByOne() {
+        Study study = bumps(3);
+        MeasureTable table = Measurement.run(study, request(study, "rare").measure("peak")
+                .measure("local-peak").grand(true).jackknife(true).build());
+        List<MeasureTable.Row> copy = new java.util.ArrayList<>(table.rows());
+        assertThat(table.rows()).isEqualTo(copy).hasSameHashCodeAs(copy);
+        assertThat(new MeasureTable(copy, table.warnings())).isEqualTo(table);
+        // 3 channels × 2 measures × (3 participants + 3 jackknife + grand)
+        assertThat(table.rows()).hasSize(42);
+        assertThatThrownBy(() -> table.rows().add(copy.get(0))).isInstanceOf(UnsupportedOperationException.class);
+        assertThatThrownBy(() -> table.rows().set(0, copy.get(0))).isInstanceOf(UnsupportedOperationException.class);
+        assertThatThrownBy(() -> table.rows().get(42)).isInstanceOf(IndexOutOfBoundsException.class);
+    }
 }
