@@ -119,19 +119,17 @@ public final class Waveforms {
 
     /**
      * Copies samples {@code firstSample .. firstSample + dst.length − 1} of one channel into
-     * {@code dst} as doubles: one bounds check and a plain loop over the channel's run, for
-     * measures that read a window of every channel of many participants.
+     * {@code dst}. A plain array copy moves many samples per instruction, which keeps more memory
+     * reads in flight than a loop that converts as it goes: the faster way to take windows out of
+     * many large studies.
      *
      * @throws IndexOutOfBoundsException when the channel or the span lies outside the data
      */
-    public void channelInto(int channel, int firstSample, double[] dst) {
+    public void channelInto(int channel, int firstSample, float[] dst) {
         int n = axis.samples();
         Objects.checkIndex(channel, labels.size());
         Objects.checkFromIndexSize(firstSample, dst.length, n);
-        int off = channel * n + firstSample;
-        for (int s = 0; s < dst.length; s++) {
-            dst[s] = values[off + s];
-        }
+        System.arraycopy(values, channel * n + firstSample, dst, 0, dst.length);
     }
 
     /** Copies the values at one sample (one value per channel, a map) into {@code dst}. */

@@ -121,16 +121,18 @@ public final class Measurement {
             double[][] series = new double[keepSeries ? n : 1][axis.samples()];
             double[][] leaveOneOut = request.jackknife() ? new double[n][axis.samples()] : null;
             List<Measure> measures = request.measures();
+            Polarity polarity = request.settings().polarity();
             Score[][][] scores = new Score[ranges.size()][n][];
+            float[] buffer = new float[axis.samples()];
             for (Region region : regions) {
                 int[] idx = region.indices(waves[0]);
                 // each participant's series is scored right after it is taken out, while in cache
                 for (int i = 0; i < n; i++) {
                     double[] x = series[keepSeries ? i : 0];
-                    Region.meanInto(waves[i], idx, first, x);
+                    Region.meanInto(waves[i], idx, first, x, buffer);
                     for (int w = 0; w < ranges.size(); w++) {
                         TimeWindow.SampleRange r = ranges.get(w);
-                        scores[w][i] = scoreAll(measures, new Trace(x, axis, r.from(), r.to()));
+                        scores[w][i] = scoreAll(measures, new Trace(x, axis, r.from(), r.to(), polarity));
                     }
                 }
                 double[] grand = request.grand() ? weightedMean(series, weights) : null;
@@ -144,10 +146,10 @@ public final class Measurement {
                     if (leaveOneOut != null) {
                         subsampleScores = new Score[n][];
                         for (int i = 0; i < n; i++) {
-                            subsampleScores[i] = scoreAll(measures, new Trace(leaveOneOut[i], axis, r.from(), r.to()));
+                            subsampleScores[i] = scoreAll(measures, new Trace(leaveOneOut[i], axis, r.from(), r.to(), polarity));
                         }
                     }
-                    Trace grandTrace = grand == null ? null : new Trace(grand, axis, r.from(), r.to());
+                    Trace grandTrace = grand == null ? null : new Trace(grand, axis, r.from(), r.to(), polarity);
                     // rows are written measure by measure
                     for (int m = 0; m < measures.size(); m++) {
                         Measure measure = measures.get(m);

@@ -74,15 +74,23 @@ public record Region(String label, List<String> channels) {
      * {@code dst}, given its channel indices.
      */
     public static void meanInto(Waveforms w, int[] indices, int first, double[] dst) {
-        w.channelInto(indices[0], first, dst);
+        meanInto(w, indices, first, dst, new float[dst.length]);
+    }
+
+    /** As {@link #meanInto(Waveforms, int[], int, double[])}, with a buffer of dst.length floats. */
+    static void meanInto(Waveforms w, int[] indices, int first, double[] dst, float[] buffer) {
+        // the floats are copied in bulk first and converted from cache (see Waveforms.channelInto)
+        w.channelInto(indices[0], first, buffer);
+        for (int s = 0; s < dst.length; s++) {
+            dst[s] = buffer[s];
+        }
         if (indices.length == 1) {
             return;
         }
-        double[] other = new double[dst.length];
         for (int k = 1; k < indices.length; k++) {
-            w.channelInto(indices[k], first, other);
+            w.channelInto(indices[k], first, buffer);
             for (int s = 0; s < dst.length; s++) {
-                dst[s] += other[s];
+                dst[s] += buffer[s];
             }
         }
         for (int s = 0; s < dst.length; s++) {

@@ -17,15 +17,24 @@ public final class Trace {
     private final int from;
     private final int to;
 
+    /** The polarity whose extreme the shared scan looks for. */
+    private final Polarity expected;
     private WindowScan scan;
-    /** The first largest and first smallest window samples, −1 until scanned. */
-    private int maxIndex = -1;
-    private int minIndex = -1;
+    /** The extreme of the other polarity, −1 until searched. */
+    private int otherExtreme = -1;
     private Polarity localFor;
     private int localK;
     private int local;
 
     public Trace(double[] values, TimeAxis axis, int from, int to) {
+        this(values, axis, from, to, Polarity.POSITIVE);
+    }
+
+    /**
+     * A trace whose measures will mostly ask for {@code expected}'s extreme: the shared scan
+     * finds that one on its way, any other is searched separately.
+     */
+    Trace(double[] values, TimeAxis axis, int from, int to, Polarity expected) {
         if (values.length != axis.samples()) {
             throw new IllegalArgumentException(values.length + " values for " + axis.samples() + " samples");
         }
@@ -37,6 +46,7 @@ public final class Trace {
         this.axis = axis;
         this.from = from;
         this.to = to;
+        this.expected = expected;
     }
 
     /** The whole wave (not a copy; do not change it). */
@@ -72,25 +82,21 @@ public final class Trace {
      * most positive sample for positive polarity, the most negative for negative polarity.
      */
     public int extremeIndex(Polarity polarity) {
-        // only the extreme asked for is searched: each one's updates are mispredicted branches
-        if (polarity == Polarity.NEGATIVE) {
-            if (minIndex < 0) {
-                minIndex = firstExtreme(-1);
-            }
-            return minIndex;
+        if (polarity.sign() == expected.sign()) {
+            return scan().extremeIndex;
         }
-        if (maxIndex < 0) {
-            maxIndex = firstExtreme(1);
+        if (otherExtreme < 0) {
+            otherExtreme = firstExtreme(polarity.sign());
         }
-        return maxIndex;
+        return otherExtreme;
     }
 
     private int firstExtreme(int sign) {
         int best = from;
-        double bestValue = values[from];
+        double bestValue = sign * values[from];
         for (int i = from + 1; i <= to; i++) {
-            double v = values[i];
-            if (sign > 0 ? v > bestValue : v < bestValue) {
+            double v = sign * values[i];
+            if (v > bestValue) {
                 bestValue = v;
                 best = i;
             }
@@ -122,7 +128,7 @@ public final class Trace {
     /** The window's shared one-pass results, scanned on first use. */
     private WindowScan scan() {
         if (scan == null) {
-            scan = WindowScan.of(values, from, to);
+            scan = WindowScan.of(values, from, to, expected.sign());
         }
         return scan;
     }

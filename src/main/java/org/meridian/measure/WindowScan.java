@@ -1,19 +1,22 @@
 package org.meridian.measure;
 
 /**
- * The window sums that the mean and the area share, from one pass over x[from..to]: the sums of
- * x and of |x|, and the zero crossings' overshoot Σ −x_j·x_{j+1} / |x_j − x_{j+1}| over the
- * intervals from ≤ j &lt; to whose ends have opposite signs (see {@link SegmentArea}).
+ * What one pass over a window's samples x[from..to] gives the measures that share it: the sums
+ * of x and of |x| (the mean and the area, see {@link SegmentArea}), the zero crossings'
+ * overshoot Σ −x_j·x_{j+1} / |x_j − x_{j+1}| over the intervals from ≤ j &lt; to whose ends have
+ * opposite signs (the area's positive and negative parts), and the first sample with the largest
+ * sign·x for one sign (the peaks, and the local peak's first guess).
  *
  * <p>The sums are kept in two halves (samples from, from + 2, … and from + 1, from + 3, …), which
  * halves the chain of dependent additions; the order of every addition is fixed, so results are
- * the same bit for bit on every run.
+ * the same bit for bit on every run and as when each measure had its own loop. The extreme's
+ * comparisons ride along in the same loop, where the additions' latency leaves room for them.
  *
- * <p>Crossings: a wave near zero crosses it every few tens of samples at random, so a test and
- * branch at every interval is mispredicted at every crossing, which costs more than the rest of
- * the pass. The pass therefore records, without branching, every interval whose ends differ in
- * sign bit (a superset of the crossings: a zero end has a sign bit too), and a second loop over
- * those few tests x_j·x_{j+1} &lt; 0 exactly and adds the overshoot in order of j.
+ * <p>Crossings: a wave near zero crosses it at random, every few samples if it is noisy, so a
+ * test and branch at every interval is mispredicted at every crossing, which costs more than
+ * the rest of the pass. The pass therefore records, without branching, every interval whose ends
+ * differ in sign bit (a superset of the crossings: a zero end has a sign bit too), and a second
+ * loop over those few tests x_j·x_{j+1} &lt; 0 exactly and adds the overshoot in order of j.
  */
 final class WindowScan {
     /** Candidate crossings, one buffer per thread so scans allocate nothing. */
@@ -27,23 +30,34 @@ final class WindowScan {
     final double oddAbs;
     /** Σ −x_j·x_{j+1} / |x_j − x_{j+1}| over from ≤ j &lt; to where x_j·x_{j+1} &lt; 0, in order of j. */
     final double overshoot;
+    /** +1 or −1: the sign whose extreme was searched. */
+    final int sign;
+    /** The first sample with the largest sign·x. */
+    final int extremeIndex;
 
-    private WindowScan(double evenSum, double oddSum, double evenAbs, double oddAbs, double overshoot) {
+    private WindowScan(double evenSum, double oddSum, double evenAbs, double oddAbs,
+            double overshoot, int sign, int extremeIndex) {
         this.evenSum = evenSum;
         this.oddSum = oddSum;
         this.evenAbs = evenAbs;
         this.oddAbs = oddAbs;
         this.overshoot = overshoot;
+        this.sign = sign;
+        this.extremeIndex = extremeIndex;
     }
 
-    static WindowScan of(double[] x, int from, int to) {
+    /** @param sign +1 to find the first largest sample, −1 the first smallest */
+    static WindowScan of(double[] x, int from, int to, int sign) {
+        int[] candidates = candidates(to - from + 1);
+        int count = 0;
         double sum0 = 0;
         double sum1 = 0;
         double abs0 = 0;
         double abs1 = 0;
-        double overshoot = 0;
-        // prev·a is x_from² ≥ 0 on the first step, so the interval before the window never counts
-        double prev = x[from];
+        int best = from;
+        double bestValue = sign * x[from];
+        // the first step compares x_from with itself, so the interval before the window never counts
+        long prev = Double.doubleToRawLongBits(x[from]);
         int i = from;
         for (; i + 1 <= to; i += 2) {
             double a = x[i];
@@ -52,26 +66,43 @@ final class WindowScan {
             sum1 += b;
             abs0 += Math.abs(a);
             abs1 += Math.abs(b);
-            double pa = prev * a;
-            if (pa < 0) {
-                overshoot -= pa / Math.abs(prev - a);
+            // strict comparisons keep the first of equal extremes; a before b for the same reason
+            if (sign * a > bestValue) {
+                bestValue = sign * a;
+                best = i;
             }
-            double ab = a * b;
-            if (ab < 0) {
-                overshoot -= ab / Math.abs(a - b);
+            if (sign * b > bestValue) {
+                bestValue = sign * b;
+                best = i + 1;
             }
-            prev = b;
+            long aBits = Double.doubleToRawLongBits(a);
+            long bBits = Double.doubleToRawLongBits(b);
+            // always write, advance only when the sign bits differ: no branch
+            candidates[count] = i - 1;
+            count += (int) ((prev ^ aBits) >>> 63);
+            candidates[count] = i;
+            count += (int) ((aBits ^ bBits) >>> 63);
+            prev = bBits;
         }
         if (i == to) {
             double a = x[i];
             sum0 += a;
             abs0 += Math.abs(a);
-            double pa = prev * a;
-            if (pa < 0) {
-                overshoot -= pa / Math.abs(prev - a);
+            if (sign * a > bestValue) {
+                best = i;
+            }
+            candidates[count] = i - 1;
+            count += (int) ((prev ^ Double.doubleToRawLongBits(a)) >>> 63);
+        }
+        double overshoot = 0;
+        for (int c = 0; c < count; c++) {
+            int j = candidates[c];
+            double ab = x[j] * x[j + 1];
+            if (ab < 0) {
+                overshoot -= ab / Math.abs(x[j] - x[j + 1]);
             }
         }
-        return new WindowScan(sum0, sum1, abs0, abs1, overshoot);
+        return new WindowScan(sum0, sum1, abs0, abs1, overshoot, sign, best);
     }
 
     private static int[] candidates(int length) {

@@ -16,9 +16,9 @@ class WaveformsTest {
     }
 
     @Test
-    void aSpanOfOneChannelIsCopiedAsDoubles() {
+    void aSpanOfOneChannelIsCopied() {
         Waveforms w = twoChannels();
-        double[] dst = new double[3];
+        float[] dst = new float[3];
         w.channelInto(1, 2, dst);
         assertThat(dst).containsExactly(12, 13, 14);
         w.channelInto(0, 0, dst);
@@ -32,8 +32,8 @@ class WaveformsTest {
     @Test
     void aSpanOutsideTheDataIsRefused() {
         Waveforms w = twoChannels();
-        assertThatThrownBy(() -> w.channelInto(0, 3, new double[3])).isInstanceOf(IndexOutOfBoundsException.class);
-        assertThatThrownBy(() -> w.channelInto(2, 0, new double[1])).isInstanceOf(IndexOutOfBoundsException.class);
-        assertThatThrownBy(() -> w.channelInto(0, -1, new double[1])).isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> w.channelInto(0, 3, new float[3])).isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> w.channelInto(2, 0, new float[1])).isInstanceOf(IndexOutOfBoundsException.class);
+        assertThatThrownBy(() -> w.channelInto(0, -1, new float[1])).isInstanceOf(IndexOutOfBoundsException.class);
     }
 }

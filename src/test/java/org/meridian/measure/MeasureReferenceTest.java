@@ -132,7 +132,8 @@ class MeasureReferenceTest {
             double[] x = wave(random, trial % 4);
             int from = random.nextInt(150);
             int to = from + random.nextInt(AXIS.samples() - from);
-            Trace t = new Trace(x, AXIS, from, to);
+            // the shared scan looks for one polarity's extreme; the other is searched apart
+            Trace t = new Trace(x, AXIS, from, to, random.nextBoolean() ? Polarity.POSITIVE : Polarity.NEGATIVE);
             double sum = 0;
             for (int i = from; i <= to; i++) {
                 sum += x[i];
