@@ -12,7 +12,7 @@ import ch.randelshofer.fastdoubleparser.JavaFloatParser;
  * rounded result (Clinger, 1990, "How to read floating point numbers accurately"): a float from
  * a significand m ≤ 2^24 and 10^|p| with |p| ≤ 10 (both exact in float), a double from
  * m ≤ 2^53 and |p| ≤ 22. The commonest cell, [-]digits[.digits] with at most 7 digits, is read
- * eight bytes at a time ({@link EightDigits}). Any other number of plain form goes to the fast
+ * as one eight-byte word ({@link EightDigits}). Any other number of plain form goes to the fast
  * double parser. Values are therefore bit for bit those the parser alone would give.
  *
  * <p>Anything unusual on a line (a blank or quoted cell, text, a missing or extra cell, a blank
@@ -32,13 +32,15 @@ final class NumberRows {
     private static final long FLOAT_EXACT = 1L << 24;
     private static final long DOUBLE_EXACT = 1L << 53;
     private static final int MAX_DIGITS = 18;
-    /** The eight-byte path reads two words from a cell's start: it needs this many bytes. */
-    private static final int EIGHT_BYTE_REACH = 18;
+    /**
+     * The eight-byte path reads a sign byte, one word after it and the byte after the cell: it
+     * needs this many bytes from the cell's start.
+     */
+    private static final int EIGHT_BYTE_REACH = 10;
     private static final float[] FLOAT_POW10 = {1e0f, 1e1f, 1e2f, 1e3f, 1e4f, 1e5f, 1e6f, 1e7f,
         1e8f, 1e9f, 1e10f};
     private static final double[] DOUBLE_POW10 = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9,
         1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
-    private static final long[] LONG_POW10 = {1, 10, 100, 1000, 10000, 100000, 1000000, 10000000};
 
     private final Cursor cursor = new Cursor();
     /** Where the last cell ended, or why it could not be read ({@link #SLOW}, {@link #MORE}). */
@@ -120,7 +122,7 @@ final class NumberRows {
     }
 
     /**
-     * The commonest cell, read eight bytes at a time: [-]digits[.digits] with at most 7 digits
+     * The commonest cell, read as one eight-byte word: [-]digits[.digits] with at most 7 digits
      * in all, followed by {@code stop} or a carriage return, so that m / 10^k is exact. Sets
      * {@link #cellEnd}; NaN when the cell is anything else.
      */
@@ -133,20 +135,19 @@ final class NumberRows {
         if (whole == 0 || whole > 7) {
             return Float.NaN;
         }
-        long m = EightDigits.value(w, whole);
         int end = j + whole;
         int fraction = 0;
-        if (b[end] == '.') {
-            long w2 = EightDigits.load(b, end + 1);
-            fraction = EightDigits.leadingDigits(w2);
-            if (whole + fraction > 7) {
-                return Float.NaN;
-            }
-            if (fraction > 0) {
-                m = m * LONG_POW10[fraction] + EightDigits.value(w2, fraction);
-            }
+        long digits = w;
+        if (((w >>> (8 * whole)) & 0xFF) == '.') {
+            // the fraction's digits follow in the same word: closing the point's gap lets one
+            // conversion read whole and fraction digits together (the byte shifted in is 0, so
+            // at most 7 digits count; a longer fraction fails the stop test below)
+            long below = (1L << (8 * whole)) - 1;
+            digits = (w & below) | ((w >>> 8) & ~below);
+            fraction = EightDigits.leadingDigits(digits) - whole;
             end += 1 + fraction;
         }
+        long m = EightDigits.value(digits, whole + fraction);
         byte t = b[end];
         if (t != stop && t != '\r') {
             return Float.NaN;

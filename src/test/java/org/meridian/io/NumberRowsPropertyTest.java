@@ -114,4 +114,42 @@ class NumberRowsPropertyTest {
         long high = EightDigits.load(new byte[] {'1', (byte) 0xC2, '2', '3', '4', '5', '6', '7'}, 0);
         assertThat(EightDigits.leadingDigits(high)).isEqualTo(1);
     }
+
+    @Example
+    void cellsAtTheEdgesOfTheOneWordPathMatchTheParser() throws IOException {
+        // seven digits with and without a point, a fraction too long for one word, a point with
+        // nothing after it, zeros and signs; repeated past the reader's 64 KB buffer so that
+        // cells also straddle its refills
+        String[] edge = {"1234567.", "1234567.8", "12.3456789", "1.", "0.000001", "-0.0000",
+            "9999999", "-9999.999", "+1.5", "123.4567", "-12.3456", "7", "0", "-0", "1234.567"};
+        StringBuilder sb = new StringBuilder("time_ms");
+        for (int c = 0; c < edge.length; c++) {
+            sb.append("\tE").append(c);
+        }
+        sb.append('\n');
+        int samples = 600;
+        for (int s = 0; s < samples; s++) {
+            sb.append(s);
+            for (int c = 0; c < edge.length; c++) {
+                sb.append('\t').append(edge[(c + s) % edge.length]);
+            }
+            sb.append(s % 2 == 0 ? "\n" : "\r\n");
+        }
+        Path dir = TempDirs.create();
+        try {
+            Path f = dir.resolve("edges.tsv");
+            Files.writeString(f, sb.toString(), StandardCharsets.US_ASCII);
+            Waveforms w = WaveformReader.read(f);
+            for (int s = 0; s < samples; s++) {
+                for (int c = 0; c < edge.length; c++) {
+                    String cell = edge[(c + s) % edge.length];
+                    // reference: the fast double parser on the cell alone
+                    assertThat(Float.floatToIntBits(w.value(c, s))).as(cell)
+                            .isEqualTo(Float.floatToIntBits(reference(cell, 1.0)));
+                }
+            }
+        } finally {
+            TempDirs.delete(dir);
+        }
+    }
 }
