@@ -60,9 +60,9 @@ public final class FigureFonts {
     /** The family name written into SVG text: the face, then metric-compatible stand-ins. */
     static String svgFamily(String javaFamily) {
         if (javaFamily.equalsIgnoreCase(BUNDLED_FAMILY)) {
-            return "'Liberation Sans', Arial, Helvetica, sans-serif";
+            return "Liberation Sans, Arial, Helvetica, sans-serif";
         }
-        return "'" + javaFamily + "'";
+        return javaFamily;
     }
 
     private static Font installed(String family) {

@@ -3,7 +3,6 @@ package org.meridian.figure;
 import java.awt.Color;
 import java.awt.geom.Rectangle2D;
 import java.nio.file.Path;
-import java.util.Locale;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUnits;
 import org.jfree.svg.ViewBox;
@@ -47,14 +46,36 @@ public final class SvgExport {
         AtomicFiles.writeString(file, document(drawing, widthMm, heightMm));
     }
 
-    private static String decimals(double v, int places) {
-        String s = String.format(Locale.ROOT, "%." + places + "f", v);
-        if (s.indexOf('.') >= 0) {
-            s = s.replaceAll("0+$", "");
-            if (s.endsWith(".")) {
-                s = s.substring(0, s.length() - 1);
-            }
+    /**
+     * A number rounded to a fixed number of decimals, trailing zeros dropped, never "-0": plain
+     * arithmetic rather than a formatter, as a figure prints tens of thousands of coordinates.
+     */
+    static String decimals(double v, int places) {
+        if (!Double.isFinite(v)) {
+            return "0";
         }
-        return s.equals("-0") ? "0" : s;
+        long scale = 1;
+        for (int i = 0; i < places; i++) {
+            scale *= 10;
+        }
+        long r = Math.round(Math.abs(v) * scale);
+        if (r == 0) {
+            return "0";
+        }
+        StringBuilder out = new StringBuilder(16);
+        if (v < 0) {
+            out.append('-');
+        }
+        out.append(r / scale);
+        long fraction = r % scale;
+        if (fraction != 0) {
+            String digits = Long.toString(fraction + scale).substring(1);
+            int end = digits.length();
+            while (digits.charAt(end - 1) == '0') {
+                end--;
+            }
+            out.append('.').append(digits, 0, end);
+        }
+        return out.toString();
     }
 }

@@ -35,6 +35,7 @@ final class WaveformPainter {
     private static final double TICK_PT = 2.5;
     private static final double TICK_GAP_PT = 1.5;
     private static final double LEGEND_LINE_PT = 10;
+    private static final double TOP_INSET_PT = 2;
 
     private WaveformPainter() {
     }
@@ -68,6 +69,31 @@ final class WaveformPainter {
             chart.draw(c, chartArea);
         } finally {
             c.dispose();
+        }
+        if (axisLabel) {
+            drawAmplitudeLabel(g, chartArea, scales.amplitudeLabel(), style);
+        }
+    }
+
+    /**
+     * The amplitude axis label, turned a quarter left and centred on the plot's height. Drawn
+     * here rather than by the chart, whose rotated labels take a glyph-outline path that PDF
+     * output cannot keep as text.
+     */
+    private static void drawAmplitudeLabel(Graphics2D target, Rectangle2D chartArea, String label, FigureStyle style) {
+        Graphics2D g = (Graphics2D) target.create();
+        try {
+            g.setFont(style.label());
+            g.setColor(FigureStyle.INK);
+            FontMetrics fm = g.getFontMetrics();
+            double plotTop = chartArea.getY() + TOP_INSET_PT;
+            double plotBottom = chartArea.getMaxY() - bottomSpace(g, style);
+            double centreY = (plotTop + plotBottom) / 2;
+            double x = chartArea.getX() + fm.getAscent();
+            g.rotate(-Math.PI / 2, x, centreY);
+            g.drawString(label, (float) (x - fm.stringWidth(label) / 2.0), (float) centreY);
+        } finally {
+            g.dispose();
         }
     }
 
@@ -104,7 +130,7 @@ final class WaveformPainter {
     private static XYPlot plot(Graphics2D g, PanelContent.Waveforms panel, WaveScales scales, FigureStyle style,
             boolean axisLabel, float bandOpacity) {
         NumberAxis time = axis(scales.timeLabel(), scales.timeFromMs(), scales.timeToMs(), scales.timeStepMs(), style);
-        NumberAxis amplitude = axis(axisLabel ? scales.amplitudeLabel() : null, scales.amplitudeFrom(),
+        NumberAxis amplitude = axis(null, scales.amplitudeFrom(),
                 scales.amplitudeTo(), scales.amplitudeStep(), style);
         amplitude.setInverted(scales.polarity() == org.meridian.figure.spec.Polarity.NEGATIVE_UP);
         boolean bands = panel.traces().stream().anyMatch(WaveTrace::hasBand);
@@ -131,7 +157,7 @@ final class WaveformPainter {
         plot.setDomainCrosshairVisible(false);
         plot.setRangeCrosshairVisible(false);
         plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
-        plot.setInsets(new RectangleInsets(2, 0, 0, rightInset(g, scales, style)));
+        plot.setInsets(new RectangleInsets(TOP_INSET_PT, 0, 0, rightInset(g, scales, style)));
         AxisSpace left = new AxisSpace();
         left.setLeft(leftSpace(g, scales, style));
         plot.setFixedRangeAxisSpace(left);
