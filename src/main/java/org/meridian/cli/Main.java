@@ -18,6 +18,8 @@ import picocli.CommandLine.Option;
                 + "measures for averaged ERPs.",
         subcommands = {
             MontageCommand.class,
+            InfoCommand.class,
+            SimulateCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;

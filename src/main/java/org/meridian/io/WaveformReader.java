@@ -1,0 +1,179 @@
+package org.meridian.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.BooleanSupplier;
+import org.meridian.core.Montage;
+import org.meridian.core.TimeAxis;
+import org.meridian.core.Waveforms;
+
+/**
+ * Reads one waveform file (one participant × one condition, DESIGN §4) in either orientation,
+ * told by the first header cell:
+ * <ul>
+ * <li>{@code time_ms} or {@code time_s}: samples as rows; the other header cells are channel
+ * labels, and each row holds a sample's time followed by one value per channel;</li>
+ * <li>{@code channel}: channels as rows; the other header cells are the sample times in ms, and
+ * each row holds a channel label followed by its values.</li>
+ * </ul>
+ * Values are converted to µV by the factor of the {@code # unit:} comment (CSD files in µV/m²
+ * are kept as they are). Sampling must be uniform, see {@link Sampling}.
+ */
+public final class WaveformReader {
+    private static final int INITIAL_ROWS = 1024;
+
+    private WaveformReader() {
+    }
+
+    /** Reads a waveform file; a {@link ReadException} names the file, line and cell at fault. */
+    public static Waveforms read(Path file) {
+        return read(file, () -> false);
+    }
+
+    static Waveforms read(Path file, BooleanSupplier cancelled) {
+        try (LineScanner sc = new LineScanner(file.toString(), TextInput.open(file), cancelled)) {
+            Preamble pre = Preamble.read(sc);
+            String first = pre.firstColumnKey();
+            pre.requireColumns(sc);
+            return switch (first) {
+                case "time_ms" -> samplesAsRows(sc, pre, 1.0);
+                case "time_s" -> samplesAsRows(sc, pre, 1000.0);
+                case "channel" -> channelsAsRows(sc, pre);
+                default -> throw sc.error(1, "the header starts with "
+                        + LineScanner.quote(pre.columns().get(0)) + "; a waveform file starts with"
+                        + " time_ms or time_s (samples as rows) or channel (channels as rows)");
+            };
+        }
+    }
+
+    /** Samples as rows: values arrive sample-major and are transposed at the end. */
+    private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs) {
+        List<String> labels = labels(sc, pre.columns().subList(1, pre.columns().size()), 2);
+        int channels = labels.size();
+        int width = channels + 1;
+        double factor = pre.unit().factor();
+        double[] times = new double[INITIAL_ROWS];
+        int[] lines = new int[INITIAL_ROWS];
+        float[] bySample = new float[INITIAL_ROWS * channels];
+        int n = 0;
+        while (sc.next()) {
+            if (sc.cellCount() != width) {
+                if (sc.cellCount() == 1 && sc.isBlank()) {
+                    continue;
+                }
+                throw ragged(sc, width);
+            }
+            if (n == times.length) {
+                int cap = n * 2;
+                times = Arrays.copyOf(times, cap);
+                lines = Arrays.copyOf(lines, cap);
+                bySample = Arrays.copyOf(bySample, cap * channels);
+            }
+            times[n] = sc.number(0) * toMs;
+            lines[n] = sc.line();
+            int base = n * channels;
+            for (int c = 0; c < channels; c++) {
+                bySample[base + c] = sc.value(c + 1, factor);
+            }
+            n++;
+        }
+        if (n == 0) {
+            throw new ReadException(sc.file(), pre.headerLine(), 0, "a header but no data rows");
+        }
+        final int[] rowLines = lines;
+        TimeAxis axis = Sampling.axis(times, n, (i, problem) ->
+                new ReadException(sc.file(), rowLines[i], 1, problem));
+        float[] byChannel = new float[channels * n];
+        for (int s = 0; s < n; s++) {
+            int base = s * channels;
+            for (int c = 0; c < channels; c++) {
+                byChannel[c * n + s] = bySample[base + c];
+            }
+        }
+        return Waveforms.wrap(labels, axis, pre.unit().unit(), byChannel);
+    }
+
+    /** Channels as rows: the header holds the times, each row one channel. */
+    private static Waveforms channelsAsRows(LineScanner sc, Preamble pre) {
+        int samples = pre.columns().size() - 1;
+        double[] times = new double[samples];
+        for (int s = 0; s < samples; s++) {
+            times[s] = sc.number(s + 1);
+        }
+        int headerLine = pre.headerLine();
+        TimeAxis axis = Sampling.axis(times, samples, (i, problem) ->
+                new ReadException(sc.file(), headerLine, i + 2, problem));
+        int width = samples + 1;
+        double factor = pre.unit().factor();
+        List<String> labels = new ArrayList<>();
+        Map<String, Integer> seenOnLine = new HashMap<>();
+        float[] byChannel = new float[16 * samples];
+        while (sc.next()) {
+            if (sc.cellCount() != width) {
+                if (sc.cellCount() == 1 && sc.isBlank()) {
+                    continue;
+                }
+                throw ragged(sc, width);
+            }
+            String label = sc.text(0);
+            if (label.isEmpty()) {
+                throw sc.error(1, "empty channel label");
+            }
+            Integer previous = seenOnLine.put(Montage.key(label), sc.line());
+            if (previous != null) {
+                throw sc.error(1, "channel " + label + " appears twice (also on line " + previous
+                        + ")");
+            }
+            int c = labels.size();
+            if ((c + 1) * samples > byChannel.length) {
+                byChannel = Arrays.copyOf(byChannel, byChannel.length * 2);
+            }
+            int base = c * samples;
+            for (int s = 0; s < samples; s++) {
+                byChannel[base + s] = sc.value(s + 1, factor);
+            }
+            labels.add(label);
+        }
+        if (labels.isEmpty()) {
+            throw new ReadException(sc.file(), headerLine, 0, "a header but no data rows");
+        }
+        float[] values = byChannel.length == labels.size() * samples ? byChannel
+                : Arrays.copyOf(byChannel, labels.size() * samples);
+        return Waveforms.wrap(labels, axis, pre.unit().unit(), values);
+    }
+
+    /** Channel labels from header cells: none empty, none twice (ignoring case). */
+    static List<String> labels(LineScanner sc, List<String> cells, int firstColumn) {
+        Map<String, Integer> seen = new HashMap<>();
+        List<String> out = new ArrayList<>(cells.size());
+        for (int i = 0; i < cells.size(); i++) {
+            String label = cells.get(i);
+            int column = firstColumn + i;
+            if (label.isEmpty()) {
+                throw sc.error(column, "empty channel label in the header");
+            }
+            Integer previous = seen.put(Montage.key(label), column);
+            if (previous != null) {
+                throw sc.error(column, "channel " + label + " appears twice in the header (also"
+                        + " column " + previous + ")");
+            }
+            out.add(label);
+        }
+        return out;
+    }
+
+    /** A row whose cell count differs from the header's; the column is the first cell at odds. */
+    static ReadException ragged(LineScanner sc, int width) {
+        int have = sc.cellCount();
+        if (have < width) {
+            return sc.error(have + 1, "the row has " + have + " cells but the header has " + width
+                    + " (missing cell)");
+        }
+        return sc.error(width + 1, "the row has " + have + " cells but the header has " + width
+                + " (extra cell" + (have - width > 1 ? "s" : "") + ")");
+    }
+}
