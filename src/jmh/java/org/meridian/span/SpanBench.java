@@ -33,6 +33,8 @@ public class SpanBench {
     private List<Waveforms> participants;
     private SpanWindow window;
     private WindowMaps grandMaps;
+    private WindowMaps oddMaps;
+    private WindowMaps evenMaps;
 
     @Setup
     public void setUp() {
@@ -50,6 +52,7 @@ public class SpanBench {
         }
         participants = new ArrayList<>();
         float[] grand = new float[CHANNELS * SAMPLES];
+        float[][] halves = new float[2][CHANNELS * SAMPLES];
         for (int p = 0; p < PARTICIPANTS; p++) {
             float[] v = new float[CHANNELS * SAMPLES];
             for (int c = 0; c < CHANNELS; c++) {
@@ -58,12 +61,15 @@ public class SpanBench {
                     double b = Math.exp(-0.5 * Math.pow((t - 170) / 30.0, 2));
                     v[c * SAMPLES + t] = (float) (4 * a * m1[c] + 3 * b * m2[c] + rnd.nextDouble(-2, 2));
                     grand[c * SAMPLES + t] += v[c * SAMPLES + t] / PARTICIPANTS;
+                    halves[p % 2][c * SAMPLES + t] += 2 * v[c * SAMPLES + t] / PARTICIPANTS;
                 }
             }
             participants.add(Waveforms.wrap(labels, axis, Unit.MICROVOLT, v));
         }
         window = SpanWindow.middle(axis, 0, axis.lastMs(), "--window");
         grandMaps = new WindowMaps(Waveforms.wrap(labels, axis, Unit.MICROVOLT, grand), window);
+        oddMaps = new WindowMaps(Waveforms.wrap(labels, axis, Unit.MICROVOLT, halves[0]), window);
+        evenMaps = new WindowMaps(Waveforms.wrap(labels, axis, Unit.MICROVOLT, halves[1]), window);
     }
 
     @Benchmark
@@ -81,6 +87,12 @@ public class SpanBench {
     @Benchmark
     public int segmentationUpToEightStatesTwentyRestarts() {
         return new TopographicClustering(8, 20, 1).segment(grandMaps).k();
+    }
+
+    /** As the span analysis runs it: k cross-validated on two halves of the participants. */
+    @Benchmark
+    public int segmentationCrossValidatedOnHalves() {
+        return new TopographicClustering(8, 20, 1).segment(grandMaps, oddMaps, evenMaps).k();
     }
 
     @Benchmark

@@ -18,7 +18,8 @@ import org.meridian.stats.SignFlipTest;
  * <li>The field's channels: the positioned ones (an EOG channel without a position is no part
  *     of the scalp field); when no channel has a position, all of them.</li>
  * <li>Each participant's waveforms of the condition over those channels, or their CSD.</li>
- * <li>Their unweighted grand average gives the descriptive trace and segmentation.</li>
+ * <li>Their unweighted grand average gives the descriptive trace and segmentation; the grand
+ *     averages of alternate participants (two halves) cross-validate the number of states.</li>
  * <li>Each participant's early and late mean maps give the span test.</li>
  * </ol>
  */
@@ -46,8 +47,8 @@ public final class SpanAnalysis {
         }
         SpanWindow window = settings.splitMs().isPresent()
                 ? SpanWindow.splitAt(study.axis(), settings.startMs(), settings.endMs(),
-                        settings.splitMs().getAsDouble(), "--window", "--split")
-                : SpanWindow.middle(study.axis(), settings.startMs(), settings.endMs(), "--window");
+                        settings.splitMs().getAsDouble(), "option --window", "option --split")
+                : SpanWindow.middle(study.axis(), settings.startMs(), settings.endMs(), "option --window");
         int reference = referenceSample(window, settings);
 
         int n = study.participants().size();
@@ -62,8 +63,14 @@ public final class SpanAnalysis {
         WindowMaps maps = new WindowMaps(grand, window);
         StabilityTrace trace = StabilityTrace.of(maps, reference);
         progress.checkCancelled();
+        WindowMaps halfA = null;
+        WindowMaps halfB = null;
+        if (n >= 4) {
+            halfA = new WindowMaps(half(study, field, 0), window);
+            halfB = new WindowMaps(half(study, field, 1), window);
+        }
         Segmentation segmentation = new TopographicClustering(settings.maxStates(),
-                settings.restarts(), settings.seed()).segment(maps);
+                settings.restarts(), settings.seed()).segment(maps, halfA, halfB);
 
         double[][] early = new double[n][];
         double[][] late = new double[n][];
@@ -76,6 +83,20 @@ public final class SpanAnalysis {
         SpanTest.Result test = SpanTest.run(early, late, flips, settings.alpha(), progress);
         return new SpanReport(condition, settings, window, grand.unit(), channels, leftOut,
                 study.participants(), trace, segmentation, test);
+    }
+
+    /**
+     * The grand average of every other participant (study order), starting at {@code parity}:
+     * the halves on which the segmentation's choice of k is cross-validated.
+     */
+    private static Waveforms half(Study study, Waveforms[] field, int parity) {
+        Set<String> others = new java.util.HashSet<>();
+        for (int p = 0; p < field.length; p++) {
+            if (p % 2 != parity) {
+                others.add(study.participants().get(p));
+            }
+        }
+        return GrandAverage.of(study, p -> field[p], GrandAverage.Weighting.UNWEIGHTED, others, p -> -1);
     }
 
     /** The positioned channels in the study's order, or all channels when none has a position. */
@@ -95,7 +116,7 @@ public final class SpanAnalysis {
         }
         double t = settings.referenceMs().getAsDouble();
         if (!window.contains(t)) {
-            throw new BadInputException("--reference-time: " + SpanWindow.fmt(t)
+            throw new BadInputException("option --reference-time: " + SpanWindow.fmt(t)
                     + " ms lies outside the window " + SpanWindow.fmt(window.startMs()) + ".."
                     + SpanWindow.fmt(window.endMs()) + " ms");
         }

@@ -30,17 +30,17 @@ public record SpanSettings(double startMs, double endMs, OptionalDouble splitMs,
 
     public SpanSettings {
         if (maxStates < 1 || maxStates > 20) {
-            throw new BadInputException("--max-states: " + maxStates + " is not between 1 and 20");
+            throw new BadInputException("option --max-states: " + maxStates + " is not between 1 and 20");
         }
         if (restarts < 1 || restarts > 1000) {
-            throw new BadInputException("--restarts: " + restarts + " is not between 1 and 1000");
+            throw new BadInputException("option --restarts: " + restarts + " is not between 1 and 1000");
         }
         if (permutations < 99 || permutations > 10_000_000) {
-            throw new BadInputException("--permutations: " + permutations
+            throw new BadInputException("option --permutations: " + permutations
                     + " is not between 99 and 10000000");
         }
         if (!(alpha > 0 && alpha < 1)) {
-            throw new BadInputException("--alpha: " + alpha + " is not between 0 and 1");
+            throw new BadInputException("option --alpha: " + alpha + " is not between 0 and 1");
         }
     }
 

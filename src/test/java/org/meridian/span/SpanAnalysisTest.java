@@ -83,6 +83,6 @@ class SpanAnalysisTest {
         assertThatThrownBy(() -> SpanAnalysis.run(s, "rare", p -> s.waveforms(p, 0),
                 SpanSettings.window(240, 360).withReferenceMs(500), Progress.NONE))
                 .isInstanceOf(BadInputException.class)
-                .hasMessage("--reference-time: 500 ms lies outside the window 240..360 ms");
+                .hasMessage("option --reference-time: 500 ms lies outside the window 240..360 ms");
     }
 }
