@@ -10,7 +10,10 @@ import org.meridian.stats.SignFlipTest;
  * account for a window in every participant, or does the map change between the early and the
  * late part of the window?
  *
- * <p>The residuals d_i and the statistic S = |mean_i d_i|² are those of {@link SpanResiduals}.
+ * <p>First the pairs of part maps are whitened ({@link PairWhitening}: one invertible 2 × 2
+ * mixing of the early and late parts, the same for every participant, which leaves the question
+ * unchanged and keeps noise shared by the two parts from biasing the fit). Then the residuals
+ * d_i and the statistic S = |mean_i d_i|² are those of {@link SpanResiduals}.
  * Under the null hypothesis each d_i is symmetric about 0, so S is compared with its values
  * under every sign pattern (d_i → s_i d_i): all 2^N patterns when N ≤ 16, else m random
  * patterns with p = (b + 1)/(m + 1) ({@link SignFlipTest}). The d_i are not centred before
@@ -39,9 +42,10 @@ public final class SpanTest {
      * @param randomisation the sign-flip test's result (p, patterns)
      * @param alpha     the level the verdict was taken at
      * @param verdict   "changes" when p &lt; alpha, else "stable"
+     * @param diss      DISS between the normalised grand-mean early and late maps (the effect size)
      */
     public record Result(SpanResiduals residuals, PermutationResult randomisation, double alpha,
-            SpanVerdict verdict) {
+            SpanVerdict verdict, double diss) {
 
         /** S = Σ_c (mean_i d_ic)². */
         public double statistic() {
@@ -52,17 +56,13 @@ public final class SpanTest {
             return randomisation.p();
         }
 
-        /** DISS between the normalised grand-mean early and late maps. */
-        public double diss() {
-            return residuals.grandMeanDiss();
-        }
-
         /**
          * The smallest p these participants and patterns allow; when it is not below alpha the
          * test cannot say "changes" whatever the data.
          */
         public double smallestPossibleP() {
-            return randomisation.exact() ? 2.0 / randomisation.patterns() : 1.0 / (randomisation.patterns() + 1);
+            return randomisation.exact() ? 2.0 / randomisation.patterns()
+                    : 1.0 / (randomisation.patterns() + 1);
         }
     }
 
@@ -72,11 +72,33 @@ public final class SpanTest {
      */
     public static Result run(double[][] early, double[][] late, SignFlipTest signFlips,
             double alpha, Progress progress) {
+        return run(early, late, signFlips, alpha, progress, true);
+    }
+
+    /**
+     * The test with or without the whitening of the part pairs ({@link PairWhitening}); without
+     * it is the test as first specified, kept for the validation's comparison.
+     */
+    static Result run(double[][] early, double[][] late, SignFlipTest signFlips, double alpha,
+            Progress progress, boolean whiten) {
         requireAlpha(alpha);
-        SpanResiduals r = new SpanResiduals(early, late);
+        // the effect size is read from the maps as measured, before any whitening
+        double diss = FieldStatistics.diss(grandMean(early), grandMean(late));
+        double[][][] pair = whiten ? PairWhitening.whiten(early, late) : new double[][][] {early, late};
+        SpanResiduals r = new SpanResiduals(pair[0], pair[1]);
         double tolerance = TIE_TOLERANCE * r.largestPossibleStatistic();
         PermutationResult p = signFlips.run(r.participants(), r::statisticFor, tolerance, progress);
-        return new Result(r, p, alpha, SpanVerdict.of(p.p(), alpha));
+        return new Result(r, p, alpha, SpanVerdict.of(p.p(), alpha), diss);
+    }
+
+    static double[] grandMean(double[][] maps) {
+        double[] m = new double[maps[0].length];
+        for (double[] map : maps) {
+            for (int c = 0; c < m.length; c++) {
+                m[c] += map[c] / maps.length;
+            }
+        }
+        return m;
     }
 
     static void requireAlpha(double alpha) {

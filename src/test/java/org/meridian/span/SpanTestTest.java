@@ -118,10 +118,52 @@ class SpanTestTest {
             l2[i] = scaled(s[1][i], -1e-3);
         }
         SpanTest.Result b = SpanTest.run(e2, l2, FLIPS, 0.05, Progress.NONE);
-        // common practice: a change of unit (µV → mV) and of polarity convention changes nothing
+        // common practice: a change of unit (µV → mV) and of polarity convention changes nothing;
+        // after the whitening S has no unit at all
         assertThat(b.p()).isEqualTo(a.p());
-        assertThat(b.statistic()).isCloseTo(a.statistic() * 1e-6, within(1e-12 * a.statistic()));
+        assertThat(b.statistic()).isCloseTo(a.statistic(), within(1e-9 * a.statistic()));
         assertThat(b.diss()).isCloseTo(a.diss(), within(1e-12));
+    }
+
+    @Test
+    void anyInvertibleMixingOfTheTwoPartsGivesTheSameTest() {
+        double[][][] s = twoMapStudy(15, 12, 24, new double[] {1, 0.4}, new double[] {0.3, 1}, 1.5);
+        SpanTest.Result a = SpanTest.run(s[0], s[1], FLIPS, 0.05, Progress.NONE);
+        double[][] mixes = {{2, 0.5, -1, 3}, {0, 1, 1, 0}, {1, 1, 1, -1}, {-4, 0, 0, 0.01}};
+        for (double[] m : mixes) {
+            double[][] x = new double[12][24];
+            double[][] y = new double[12][24];
+            for (int i = 0; i < 12; i++) {
+                for (int c = 0; c < 24; c++) {
+                    x[i][c] = m[0] * s[0][i][c] + m[2] * s[1][i][c];
+                    y[i][c] = m[1] * s[0][i][c] + m[3] * s[1][i][c];
+                }
+            }
+            SpanTest.Result b = SpanTest.run(x, y, FLIPS, 0.05, Progress.NONE);
+            // PairWhitening: [x y]A(AᵀTA)^(−1/2) = [x y]T^(−1/2)R with R orthogonal (polar
+            // decomposition, a textbook identity), and S = σ₂² is unchanged by R
+            assertThat(b.statistic()).as("mix %s", java.util.Arrays.toString(m))
+                    .isCloseTo(a.statistic(), within(1e-9 * a.statistic()));
+            assertThat(b.p()).isEqualTo(a.p());
+        }
+    }
+
+    @Test
+    void whitenedPairsHaveAnIdentitySecondMoment() {
+        double[][][] s = twoMapStudy(16, 9, 20, new double[] {1, 0.2}, new double[] {0.5, 0.8}, 2);
+        double[][][] w = PairWhitening.whiten(s[0], s[1]);
+        double xx = 0;
+        double xy = 0;
+        double yy = 0;
+        for (int i = 0; i < 9; i++) {
+            xx += SpanResiduals.dot(w[0][i], w[0][i]) / 9;
+            xy += SpanResiduals.dot(w[0][i], w[1][i]) / 9;
+            yy += SpanResiduals.dot(w[1][i], w[1][i]) / 9;
+        }
+        // definition of W = T^(−1/2): Wᵀ T W = I
+        assertThat(xx).isCloseTo(1, within(1e-12));
+        assertThat(xy).isCloseTo(0, within(1e-12));
+        assertThat(yy).isCloseTo(1, within(1e-12));
     }
 
     @Test
