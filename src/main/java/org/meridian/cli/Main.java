@@ -20,6 +20,9 @@ import picocli.CommandLine.Option;
             MontageCommand.class,
             InfoCommand.class,
             SimulateCommand.class,
+            CsdCommand.class,
+            RepairCommand.class,
+            MapsCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;
