@@ -8,6 +8,8 @@ import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.signal.GrandAverage;
+import org.meridian.spline.SplineParameters;
+import org.meridian.spline.SurfaceLaplacian;
 import org.meridian.stats.Progress;
 import org.meridian.stats.SignFlipTest;
 
@@ -17,7 +19,9 @@ import org.meridian.stats.SignFlipTest;
  * <ol>
  * <li>The field's channels: the positioned ones (an EOG channel without a position is no part
  *     of the scalp field); when no channel has a position, all of them.</li>
- * <li>Each participant's waveforms of the condition over those channels, or their CSD.</li>
+ * <li>Each participant's waveforms of the condition over those channels, or their CSD
+ *     (−∇²V in µV/m² at the positioned channels, spherical spline with the default m = 4,
+ *     λ = 1e-5, 50 terms, R = 0.10 m; {@link SurfaceLaplacian}).</li>
  * <li>Their unweighted grand average gives the descriptive trace and segmentation; the grand
  *     averages of alternate participants (two halves) cross-validate the number of states.</li>
  * <li>Each participant's early and late mean maps give the span test.</li>
@@ -38,7 +42,9 @@ public final class SpanAnalysis {
      */
     public static SpanReport run(Study study, String condition, IntFunction<Waveforms> waveforms,
             SpanSettings settings, Progress progress) {
-        List<String> channels = fieldChannels(study);
+        SurfaceLaplacian laplacian = settings.csd()
+                ? new SurfaceLaplacian(study.montage(), SplineParameters.defaults()) : null;
+        List<String> channels = laplacian != null ? laplacian.spline().labels() : fieldChannels(study);
         List<String> leftOut = new ArrayList<>(study.channelLabels());
         leftOut.removeIf(l -> channels.stream().anyMatch(l::equalsIgnoreCase));
         if (channels.size() < 3) {
@@ -55,8 +61,8 @@ public final class SpanAnalysis {
         Waveforms[] field = new Waveforms[n];
         for (int p = 0; p < n; p++) {
             progress.checkCancelled();
-            Waveforms w = waveforms.apply(p).select(channels);
-            field[p] = settings.csd() ? csd(study, w) : w;
+            Waveforms w = waveforms.apply(p);
+            field[p] = laplacian != null ? laplacian.of(w) : w.select(channels);
         }
         Waveforms grand = GrandAverage.of(study, p -> field[p], GrandAverage.Weighting.UNWEIGHTED,
                 Set.of(), p -> -1);
@@ -121,9 +127,5 @@ public final class SpanAnalysis {
                     + SpanWindow.fmt(window.endMs()) + " ms");
         }
         return window.axis().nearestIndex(t) - window.first();
-    }
-
-    private static Waveforms csd(Study study, Waveforms w) {
-        throw new BadInputException("--csd: the CSD transform is not available in this build yet");
     }
 }

@@ -78,6 +78,20 @@ class SpanAnalysisTest {
     }
 
     @Test
+    void csdIsAnalysedAtThePositionedChannelsInMicrovoltsPerSquareMetre() {
+        Study s = study(8, true, 6);
+        SpanReport r = SpanAnalysis.run(s, "rare", p -> s.waveforms(p, 0),
+                SpanSettings.window(260, 420).withCsd(true), Progress.NONE);
+        // DESIGN §5: CSD is −∇²V in µV/m² at the positioned channels only
+        assertThat(r.unit()).isEqualTo(Unit.MICROVOLT_PER_SQUARE_METRE);
+        assertThat(r.leftOut()).containsExactly("HEOG");
+        assertThat(r.channels()).hasSize(s.montage().size());
+        assertThat(r.test().verdict()).isEqualTo(SpanVerdict.CHANGES);
+        String summary = SpanReportText.summaryLines(r, "");
+        assertThat(summary).contains("maps: CSD (µV/m²)");
+    }
+
+    @Test
     void aReferenceTimeOutsideTheWindowIsRefused() {
         Study s = study(3, false, 5);
         assertThatThrownBy(() -> SpanAnalysis.run(s, "rare", p -> s.waveforms(p, 0),
