@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 import org.meridian.core.TimeAxis;
+import org.meridian.signal.TimeWindow;
 import org.meridian.core.Unit;
 import org.meridian.core.Waveforms;
 import org.meridian.stats.Progress;
@@ -66,7 +67,7 @@ public class SpanBench {
             }
             participants.add(Waveforms.wrap(labels, axis, Unit.MICROVOLT, v));
         }
-        window = SpanWindow.middle(axis, 0, axis.lastMs(), "--window");
+        window = SpanWindow.middle(axis, new TimeWindow(0, axis.lastMs()), "--window");
         grandMaps = new WindowMaps(Waveforms.wrap(labels, axis, Unit.MICROVOLT, grand), window);
         oddMaps = new WindowMaps(Waveforms.wrap(labels, axis, Unit.MICROVOLT, halves[0]), window);
         evenMaps = new WindowMaps(Waveforms.wrap(labels, axis, Unit.MICROVOLT, halves[1]), window);

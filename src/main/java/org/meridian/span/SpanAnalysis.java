@@ -8,7 +8,6 @@ import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.signal.GrandAverage;
-import org.meridian.spline.SplineParameters;
 import org.meridian.spline.SurfaceLaplacian;
 import org.meridian.stats.Progress;
 import org.meridian.stats.SignFlipTest;
@@ -20,8 +19,8 @@ import org.meridian.stats.SignFlipTest;
  * <li>The field's channels: the positioned ones (an EOG channel without a position is no part
  *     of the scalp field); when no channel has a position, all of them.</li>
  * <li>Each participant's waveforms of the condition over those channels, or their CSD
- *     (−∇²V in µV/m² at the positioned channels, spherical spline with the default m = 4,
- *     λ = 1e-5, 50 terms, R = 0.10 m; {@link SurfaceLaplacian}).</li>
+ *     (−∇²V in µV/m² at the positioned channels, from the spherical spline of the settings;
+ *     {@link SurfaceLaplacian}).</li>
  * <li>Their unweighted grand average gives the descriptive trace and segmentation; the grand
  *     averages of alternate participants (two halves) cross-validate the number of states.</li>
  * <li>Each participant's early and late mean maps give the span test.</li>
@@ -43,7 +42,7 @@ public final class SpanAnalysis {
     public static SpanReport run(Study study, String condition, IntFunction<Waveforms> waveforms,
             SpanSettings settings, Progress progress) {
         SurfaceLaplacian laplacian = settings.csd()
-                ? new SurfaceLaplacian(study.montage(), SplineParameters.defaults()) : null;
+                ? new SurfaceLaplacian(study.montage(), settings.spline()) : null;
         List<String> channels = laplacian != null ? laplacian.spline().labels() : fieldChannels(study);
         List<String> leftOut = new ArrayList<>(study.channelLabels());
         leftOut.removeIf(l -> channels.stream().anyMatch(l::equalsIgnoreCase));
@@ -52,9 +51,9 @@ public final class SpanAnalysis {
                     + "the study has " + channels.size() + " with a position");
         }
         SpanWindow window = settings.splitMs().isPresent()
-                ? SpanWindow.splitAt(study.axis(), settings.startMs(), settings.endMs(),
-                        settings.splitMs().getAsDouble(), "option --window", "option --split")
-                : SpanWindow.middle(study.axis(), settings.startMs(), settings.endMs(), "option --window");
+                ? SpanWindow.splitAt(study.axis(), settings.window(), settings.splitMs().getAsDouble(),
+                        "option --window", "option --split")
+                : SpanWindow.middle(study.axis(), settings.window(), "option --window");
         int reference = referenceSample(window, settings);
 
         int n = study.participants().size();

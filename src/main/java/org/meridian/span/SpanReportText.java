@@ -45,7 +45,7 @@ public final class SpanReportText {
             add(out, "segment_" + i++, "state " + seg.state() + ", " + SpanWindow.fmt(seg.startMs())
                     + ".." + SpanWindow.fmt(seg.endMs()) + " ms");
         }
-        add(out, "statistic", number(t.statistic()) + " " + squared(r.unit()));
+        add(out, "statistic", number(t.statistic()));
         add(out, "diss", fixed(t.diss(), 4));
         add(out, "p", number(t.p()));
         add(out, "patterns", t.randomisation().exact()
@@ -111,10 +111,6 @@ public final class SpanReportText {
 
     private static void add(List<Map.Entry<String, String>> out, String key, String value) {
         out.add(Map.entry(key, value));
-    }
-
-    private static String squared(org.meridian.core.Unit unit) {
-        return "(" + unit.symbol() + ")²";
     }
 
     private static String cell(double v) {

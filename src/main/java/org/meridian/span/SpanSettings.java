@@ -2,24 +2,26 @@ package org.meridian.span;
 
 import java.util.OptionalDouble;
 import org.meridian.core.BadInputException;
+import org.meridian.signal.TimeWindow;
+import org.meridian.spline.SplineParameters;
 
 /**
  * What a span analysis is asked to do. Errors name the command-line option of the value at
  * fault, since the window passes the same settings.
  *
- * @param startMs      start of the window (ms)
- * @param endMs        end of the window (ms)
+ * @param window       the window in ms
  * @param splitMs      where the late part starts; empty for the middle of the window
  * @param referenceMs  time of the reference map of the trace; empty for the GFP maximum
  * @param csd          whether to analyse the CSD (surface Laplacian) instead of the potential
+ * @param spline       the spherical spline behind the CSD
  * @param maxStates    the largest number of topographic states tried (K)
  * @param restarts     k-means runs for each k
  * @param permutations random sign-flip patterns when there are more than 16 participants
  * @param seed         seed of the random patterns and of the k-means starts
  * @param alpha        level of the verdict
  */
-public record SpanSettings(double startMs, double endMs, OptionalDouble splitMs,
-        OptionalDouble referenceMs, boolean csd, int maxStates, int restarts, int permutations,
+public record SpanSettings(TimeWindow window, OptionalDouble splitMs, OptionalDouble referenceMs,
+        boolean csd, SplineParameters spline, int maxStates, int restarts, int permutations,
         long seed, double alpha) {
 
     public static final int DEFAULT_MAX_STATES = 8;
@@ -29,6 +31,8 @@ public record SpanSettings(double startMs, double endMs, OptionalDouble splitMs,
     public static final double DEFAULT_ALPHA = 0.05;
 
     public SpanSettings {
+        java.util.Objects.requireNonNull(window, "window");
+        java.util.Objects.requireNonNull(spline, "spline");
         if (maxStates < 1 || maxStates > 20) {
             throw new BadInputException("option --max-states: " + maxStates + " is not between 1 and 20");
         }
@@ -45,38 +49,49 @@ public record SpanSettings(double startMs, double endMs, OptionalDouble splitMs,
     }
 
     /** The window with the defaults: middle split, GFP-maximum reference, potential, … */
+    public static SpanSettings window(TimeWindow window) {
+        return new SpanSettings(window, OptionalDouble.empty(), OptionalDouble.empty(), false,
+                SplineParameters.defaults(), DEFAULT_MAX_STATES, DEFAULT_RESTARTS,
+                DEFAULT_PERMUTATIONS, DEFAULT_SEED, DEFAULT_ALPHA);
+    }
+
+    /** The window [startMs, endMs] with the defaults. */
     public static SpanSettings window(double startMs, double endMs) {
-        return new SpanSettings(startMs, endMs, OptionalDouble.empty(), OptionalDouble.empty(), false,
-                DEFAULT_MAX_STATES, DEFAULT_RESTARTS, DEFAULT_PERMUTATIONS, DEFAULT_SEED, DEFAULT_ALPHA);
+        return window(new TimeWindow(startMs, endMs));
     }
 
     public SpanSettings withSplitMs(double ms) {
-        return new SpanSettings(startMs, endMs, OptionalDouble.of(ms), referenceMs, csd, maxStates,
+        return new SpanSettings(window, OptionalDouble.of(ms), referenceMs, csd, spline, maxStates,
                 restarts, permutations, seed, alpha);
     }
 
     public SpanSettings withReferenceMs(double ms) {
-        return new SpanSettings(startMs, endMs, splitMs, OptionalDouble.of(ms), csd, maxStates,
+        return new SpanSettings(window, splitMs, OptionalDouble.of(ms), csd, spline, maxStates,
                 restarts, permutations, seed, alpha);
     }
 
     public SpanSettings withCsd(boolean useCsd) {
-        return new SpanSettings(startMs, endMs, splitMs, referenceMs, useCsd, maxStates, restarts,
+        return new SpanSettings(window, splitMs, referenceMs, useCsd, spline, maxStates, restarts,
+                permutations, seed, alpha);
+    }
+
+    public SpanSettings withSpline(SplineParameters parameters) {
+        return new SpanSettings(window, splitMs, referenceMs, csd, parameters, maxStates, restarts,
                 permutations, seed, alpha);
     }
 
     public SpanSettings withSegmentation(int newMaxStates, int newRestarts) {
-        return new SpanSettings(startMs, endMs, splitMs, referenceMs, csd, newMaxStates, newRestarts,
+        return new SpanSettings(window, splitMs, referenceMs, csd, spline, newMaxStates, newRestarts,
                 permutations, seed, alpha);
     }
 
     public SpanSettings withPermutations(int newPermutations, long newSeed) {
-        return new SpanSettings(startMs, endMs, splitMs, referenceMs, csd, maxStates, restarts,
+        return new SpanSettings(window, splitMs, referenceMs, csd, spline, maxStates, restarts,
                 newPermutations, newSeed, alpha);
     }
 
     public SpanSettings withAlpha(double newAlpha) {
-        return new SpanSettings(startMs, endMs, splitMs, referenceMs, csd, maxStates, restarts,
+        return new SpanSettings(window, splitMs, referenceMs, csd, spline, maxStates, restarts,
                 permutations, seed, newAlpha);
     }
 }

@@ -3,11 +3,12 @@ package org.meridian.span;
 import java.util.Locale;
 import org.meridian.core.BadInputException;
 import org.meridian.core.TimeAxis;
+import org.meridian.signal.TimeWindow;
 
 /**
  * A window [a, b] ms of a time axis with its split into an early and a late part, as sample
- * indices (inclusive). Window edges snap to the nearest sample, a tie going toward the inside
- * of the window (DESIGN §6.3).
+ * indices (inclusive). Window edges snap as {@link TimeWindow} snaps them: to the nearest
+ * sample, a tie going toward the inside of the window (DESIGN §6.3).
  *
  * <p>The split is fixed before the data are looked at: either the middle of the window, where
  * each part gets the same number of samples (the middle sample of an odd count belongs to
@@ -28,7 +29,7 @@ import org.meridian.core.TimeAxis;
 public record SpanWindow(TimeAxis axis, int first, int earlyLast, int lateFirst, int last,
         double splitMs, boolean middle) {
 
-    /** Tolerance (in samples) under which an edge counts as exactly half-way between samples. */
+    /** Tolerance (in samples) under which a split time counts as exactly half-way between samples. */
     private static final double HALF_TOLERANCE = 1e-9;
 
     public SpanWindow {
@@ -39,55 +40,41 @@ public record SpanWindow(TimeAxis axis, int first, int earlyLast, int lateFirst,
         }
     }
 
-    /** The window [startMs, endMs] split at its middle; {@code option} names it in errors. */
-    public static SpanWindow middle(TimeAxis axis, double startMs, double endMs, String option) {
-        int[] edges = snap(axis, startMs, endMs, option);
-        int n = edges[1] - edges[0] + 1;
+    /** The window split at its middle; {@code option} names the window in errors. */
+    public static SpanWindow middle(TimeAxis axis, TimeWindow window, String option) {
+        TimeWindow.SampleRange r = snap(axis, window, option);
+        int n = r.length();
         if (n < 2) {
-            throw new BadInputException(option + ": the window " + range(startMs, endMs)
-                    + " ms holds " + n + " sample; the span needs at least 2");
+            throw new BadInputException(option + ": the window " + window + " ms holds " + n
+                    + " sample; the span needs at least 2");
         }
         int half = n / 2;
-        double split = 0.5 * (axis.timeMs(edges[0]) + axis.timeMs(edges[1]));
-        return new SpanWindow(axis, edges[0], edges[0] + half - 1, edges[1] - half + 1, edges[1],
-                split, true);
+        double split = 0.5 * (axis.timeMs(r.from()) + axis.timeMs(r.to()));
+        return new SpanWindow(axis, r.from(), r.from() + half - 1, r.to() - half + 1, r.to(), split, true);
     }
 
     /**
-     * The window [startMs, endMs] split at {@code splitMs}: the late part starts at the sample
-     * nearest to it (a tie goes late).
+     * The window split at {@code splitMs}: the late part starts at the sample nearest to it (a
+     * tie goes late).
      */
-    public static SpanWindow splitAt(TimeAxis axis, double startMs, double endMs, double splitMs,
+    public static SpanWindow splitAt(TimeAxis axis, TimeWindow window, double splitMs,
             String windowOption, String splitOption) {
-        int[] edges = snap(axis, startMs, endMs, windowOption);
+        TimeWindow.SampleRange r = snap(axis, window, windowOption);
         int k = (int) Math.floor(axis.fractionalIndex(splitMs) + 0.5 + HALF_TOLERANCE);
-        if (!Double.isFinite(splitMs) || k <= edges[0] || k > edges[1]) {
+        if (!Double.isFinite(splitMs) || k <= r.from() || k > r.to()) {
             throw new BadInputException(splitOption + ": " + fmt(splitMs) + " ms must leave samples on "
-                    + "both sides inside the window " + fmt(axis.timeMs(edges[0])) + ".."
-                    + fmt(axis.timeMs(edges[1])) + " ms");
+                    + "both sides inside the window " + fmt(axis.timeMs(r.from())) + ".."
+                    + fmt(axis.timeMs(r.to())) + " ms");
         }
-        return new SpanWindow(axis, edges[0], k - 1, k, edges[1], splitMs, false);
+        return new SpanWindow(axis, r.from(), k - 1, k, r.to(), splitMs, false);
     }
 
-    private static int[] snap(TimeAxis axis, double startMs, double endMs, String option) {
-        if (!Double.isFinite(startMs) || !Double.isFinite(endMs) || !(startMs < endMs)) {
-            throw new BadInputException(option + ": " + range(startMs, endMs)
-                    + " is not a window (the start must come before the end)");
+    private static TimeWindow.SampleRange snap(TimeAxis axis, TimeWindow window, String option) {
+        try {
+            return window.resolve(axis);
+        } catch (BadInputException e) {
+            throw new BadInputException(option + ": " + e.getMessage(), e);
         }
-        if (!axis.covers(startMs) || !axis.covers(endMs)) {
-            throw new BadInputException(option + ": " + range(startMs, endMs)
-                    + " ms reaches beyond the data (" + fmt(axis.firstMs()) + ".."
-                    + fmt(axis.lastMs()) + " ms)");
-        }
-        int a = (int) Math.floor(axis.fractionalIndex(startMs) + 0.5 + HALF_TOLERANCE);
-        int b = (int) Math.ceil(axis.fractionalIndex(endMs) - 0.5 - HALF_TOLERANCE);
-        a = Math.max(0, a);
-        b = Math.min(axis.samples() - 1, b);
-        if (b < a) {
-            throw new BadInputException(option + ": " + range(startMs, endMs)
-                    + " ms holds no sample");
-        }
-        return new int[] {a, b};
     }
 
     /** Samples in the window. */
@@ -117,10 +104,6 @@ public record SpanWindow(TimeAxis axis, int first, int earlyLast, int lateFirst,
     /** "a..b" of the sample times of the late part. */
     public String lateRangeMs() {
         return fmt(axis.timeMs(lateFirst)) + ".." + fmt(axis.timeMs(last));
-    }
-
-    private static String range(double a, double b) {
-        return fmt(a) + ":" + fmt(b);
     }
 
     /** Times for messages and summaries: plain, up to 3 decimals. */

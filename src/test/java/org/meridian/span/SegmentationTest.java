@@ -9,6 +9,7 @@ import java.util.SplittableRandom;
 import org.apache.commons.math3.stat.correlation.PearsonsCorrelation;
 import org.junit.jupiter.api.Test;
 import org.meridian.core.TimeAxis;
+import org.meridian.signal.TimeWindow;
 import org.meridian.core.Unit;
 import org.meridian.core.Waveforms;
 
@@ -51,7 +52,7 @@ class SegmentationTest {
         double[] a = FieldStatisticsTest.randomMap(rnd, 32, 0, 1);
         double[] b = FieldStatisticsTest.randomMap(rnd, 32, 0, 1);
         WindowMaps maps = new WindowMaps(waveforms(alternating(a, b, 0.3, 1)),
-                SpanWindow.middle(AXIS, 0, 198, "--window"));
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
         Segmentation s = new TopographicClustering(6, 10, 3).segment(maps);
         // synthetic truth (common practice): four blocks A B A B of 25 samples, so two states
         // and four segments at the block edges
@@ -72,7 +73,7 @@ class SegmentationTest {
         double[] a = FieldStatisticsTest.randomMap(rnd, 24, 0, 1);
         double[] minusA = SpanTestTest.scaled(a, -1);
         WindowMaps maps = new WindowMaps(waveforms(alternating(a, minusA, 0.2, 2)),
-                SpanWindow.middle(AXIS, 0, 198, "--window"));
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
         Segmentation s = new TopographicClustering(4, 5, 1).segment(maps);
         // polarity-sensitive clustering: r(a, −a) = −1, so the inverted map is a second state
         assertThat(s.k()).isEqualTo(2);
@@ -84,7 +85,7 @@ class SegmentationTest {
         SplittableRandom rnd = new SplittableRandom(8);
         double[] a = FieldStatisticsTest.randomMap(rnd, 32, 0, 1);
         WindowMaps maps = new WindowMaps(waveforms(alternating(a, a, 0.3, 4)),
-                SpanWindow.middle(AXIS, 0, 198, "--window"));
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
         Segmentation s = new TopographicClustering(6, 10, 3).segment(maps);
         // Pascual-Marqui et al. (1995): the CV penalty ((C−1)/(C−1−k))² rejects states that
         // only split noise
@@ -101,7 +102,7 @@ class SegmentationTest {
         double[] a = FieldStatisticsTest.randomMap(rnd, 16, 0, 1);
         double[] b = FieldStatisticsTest.randomMap(rnd, 16, 0, 1);
         WindowMaps maps = new WindowMaps(waveforms(alternating(a, b, 1.5, 9)),
-                SpanWindow.middle(AXIS, 0, 198, "--window"));
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
         Segmentation s1 = new TopographicClustering(5, 4, 77).segment(maps);
         Segmentation s2 = new TopographicClustering(5, 4, 77).segment(maps);
         assertThat(s2.segments()).isEqualTo(s1.segments());
@@ -114,7 +115,7 @@ class SegmentationTest {
         double[] a = FieldStatisticsTest.randomMap(rnd, 20, 0, 1);
         double[] b = FieldStatisticsTest.randomMap(rnd, 20, 0, 1);
         double[][] data = alternating(a, b, 0.5, 5);
-        WindowMaps maps = new WindowMaps(waveforms(data), SpanWindow.middle(AXIS, 20, 180, "--window"));
+        WindowMaps maps = new WindowMaps(waveforms(data), SpanWindow.middle(AXIS, new TimeWindow(20, 180), "--window"));
         StabilityTrace trace = StabilityTrace.of(maps, -1);
         int ref = trace.referenceSample();
         for (int t = 0; t < trace.size(); t++) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.meridian.core.Study;
+import org.meridian.signal.TimeWindow;
 import org.meridian.sim.ConditionSpec;
 import org.meridian.sim.ListeningDemo;
 import org.meridian.sim.Scenario;
@@ -125,7 +126,7 @@ final class SpanValidation {
         for (int k = 0; k < studies; k++) {
             Study study = simulator.simulate(seed + k).study();
             SignFlipTest flips = new SignFlipTest(exactUpTo, 999, seed + k);
-            SpanWindow middle = SpanWindow.middle(study.axis(), START_MS, END_MS, "window");
+            SpanWindow middle = SpanWindow.middle(study.axis(), new TimeWindow(START_MS, END_MS), "window");
             double[][][] parts = partMeans(study, middle);
             if (SpanTest.run(parts[0], parts[1], flips, alpha, Progress.NONE).p() < alpha) {
                 span++;
@@ -163,7 +164,7 @@ final class SpanValidation {
      * S / E*(S*), E*(S*) = Σ|d_i|²/N² being the statistic's mean over the sign patterns.
      */
     static SpanWindow dataChosenSplit(Study study) {
-        SpanWindow full = SpanWindow.splitAt(study.axis(), START_MS, END_MS, SPLIT_MS, "window", "split");
+        SpanWindow full = SpanWindow.splitAt(study.axis(), new TimeWindow(START_MS, END_MS), SPLIT_MS, "window", "split");
         SpanWindow best = null;
         double bestRatio = -1;
         for (int k = full.first() + 5; k <= full.last() - 4; k++) {
