@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
  * α = 0.05. Not part of the normal test run (its name does not end in Test); run it with
  * {@code mvn -Pspan-validation test} (add {@code -Dspan.validation.studies=N} for another
  * number of studies). Prints the table and writes it to {@code target/span-validation.md}.
- * About 25 minutes on two cores.
+ * About 17 minutes on two cores.
  */
 class SpanValidationRun {
     @Test
