@@ -102,8 +102,8 @@ final class SpanCommand implements Callable<Integer> {
     public Integer call() {
         refuseToOverwrite(output, "-o");
         refuseToOverwrite(matrix, "--matrix");
-        TimeWindow w = option("--window", () -> TimeWindow.parse(window));
-        SpanSettings settings = option("--window", () -> SpanSettings.window(w))
+        TimeWindow w = OptionErrors.about("--window", () -> TimeWindow.parse(window));
+        SpanSettings settings = OptionErrors.about("--window", () -> SpanSettings.window(w))
                 .withCsd(csd).withSpline(spline.parameters())
                 .withSegmentation(maxStates, restarts).withPermutations(permutations, seed)
                 .withAlpha(alpha);
@@ -114,7 +114,7 @@ final class SpanCommand implements Callable<Integer> {
             settings = settings.withReferenceMs(referenceTime);
         }
         Study s = StudyLoader.load(study);
-        ConditionExpression expression = option("--condition", () -> ConditionExpression.parse(condition, s));
+        ConditionExpression expression = OptionErrors.about("--condition", () -> ConditionExpression.parse(condition, s));
         SpanReport report = SpanAnalysis.run(s, expression.name(),
                 p -> expression.forParticipant(s, p), settings, Progress.NONE);
         if (matrix != null) {
@@ -130,13 +130,6 @@ final class SpanCommand implements Callable<Integer> {
     }
 
     /** Runs a step that reads an option, naming the option in its error. */
-    private static <T> T option(String name, java.util.function.Supplier<T> step) {
-        try {
-            return step.get();
-        } catch (BadInputException e) {
-            throw new BadInputException("option " + name + ": " + e.getMessage(), e);
-        }
-    }
 
     /** An export must never replace the study it reads. */
     private void refuseToOverwrite(Path target, String option) {
