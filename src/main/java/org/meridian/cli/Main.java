@@ -24,6 +24,7 @@ import picocli.CommandLine.Option;
             RepairCommand.class,
             MapsCommand.class,
             MeasureCommand.class,
+            SpanCommand.class,
             FigureCommand.class,
         })
 public final class Main implements Runnable {

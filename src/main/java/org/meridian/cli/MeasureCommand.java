@@ -105,19 +105,19 @@ final class MeasureCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Polarity chosen = option("--polarity", () -> Polarity.parse(polarity));
-        MeasureSettings withFraction = option("--fraction",
+        Polarity chosen = OptionErrors.about("--polarity", () -> Polarity.parse(polarity));
+        MeasureSettings withFraction = OptionErrors.about("--fraction",
                 () -> MeasureSettings.defaults().withPolarity(chosen).withFraction(fraction));
-        MeasureSettings settings = option("--neighbourhood-ms",
+        MeasureSettings settings = OptionErrors.about("--neighbourhood-ms",
                 () -> withFraction.withNeighbourhoodMs(neighbourhoodMs));
         MeasureRequest.Builder request = MeasureRequest.builder().settings(settings).grand(grand)
                 .jackknife(jackknife).excluded(new LinkedHashSet<>(exclude))
                 .weighting(trialWeighted ? GrandAverage.Weighting.TRIALS : GrandAverage.Weighting.UNWEIGHTED);
         for (String w : windows) {
-            request.window(option("--window", () -> TimeWindow.parse(w)));
+            request.window(OptionErrors.about("--window", () -> TimeWindow.parse(w)));
         }
         for (String m : measures) {
-            request.measure(option("--measure", () -> Measures.byName(m)));
+            request.measure(OptionErrors.about("--measure", () -> Measures.byName(m)));
         }
         channels.forEach(request::channel);
 
@@ -126,7 +126,7 @@ final class MeasureCommand implements Callable<Integer> {
         for (ConditionWave c : conditionWaves(data)) {
             request.condition(c);
         }
-        MeasureTable table = Measurement.run(data, option("--measure", request::build));
+        MeasureTable table = Measurement.run(data, OptionErrors.about("--measure", request::build));
 
         if (output == null) {
             spec.commandLine().getOut().print(table.toTsv());
@@ -140,7 +140,7 @@ final class MeasureCommand implements Callable<Integer> {
     private List<ConditionWave> conditionWaves(Study data) {
         List<ConditionWave> out = new ArrayList<>();
         for (String list : conditions) {
-            out.addAll(option("--conditions", () -> ConditionExpression.parseList(list, data.conditions())));
+            out.addAll(OptionErrors.about("--conditions", () -> ConditionExpression.parseList(list, data.conditions())));
         }
         for (String pair : lateralised) {
             List<String> sides = ConditionExpression.splitList(pair);
@@ -148,7 +148,7 @@ final class MeasureCommand implements Callable<Integer> {
                 throw new BadInputException("option --lateralised: \"" + pair
                         + "\" is not LEFT,RIGHT (the conditions with left- and right-hemifield stimuli)");
             }
-            out.add(option("--lateralised", () -> LateralisedWave.of(
+            out.add(OptionErrors.about("--lateralised", () -> LateralisedWave.of(
                     ConditionExpression.parse(sides.get(0), data.conditions()),
                     ConditionExpression.parse(sides.get(1), data.conditions()))));
         }
@@ -164,7 +164,7 @@ final class MeasureCommand implements Callable<Integer> {
         if (baseline.trim().equalsIgnoreCase("pre")) {
             return loaded.mapWaveforms(loaded.name(), (p, c) -> Baseline.preStimulus(loaded.waveforms(p, c)));
         }
-        TimeWindow w = option("--baseline", () -> TimeWindow.parse(baseline));
+        TimeWindow w = OptionErrors.about("--baseline", () -> TimeWindow.parse(baseline));
         return loaded.mapWaveforms(loaded.name(), (p, c) -> Baseline.correct(loaded.waveforms(p, c), w));
     }
 
@@ -181,11 +181,4 @@ final class MeasureCommand implements Callable<Integer> {
     }
 
     /** Runs a step that reads an option, naming the option in its error. */
-    private static <T> T option(String name, java.util.function.Supplier<T> step) {
-        try {
-            return step.get();
-        } catch (BadInputException e) {
-            throw new BadInputException("option " + name + ": " + e.getMessage(), e);
-        }
-    }
 }
