@@ -16,7 +16,9 @@ import org.meridian.figure.spec.IntervalKind;
 import org.meridian.figure.spec.MapSettings;
 import org.meridian.figure.spec.MapStripPanel;
 import org.meridian.figure.spec.PanelSpec;
+import org.meridian.figure.spec.Polarity;
 import org.meridian.figure.spec.ShownCondition;
+import org.meridian.figure.spec.SpanTracePanel;
 import org.meridian.figure.spec.WaveformAxes;
 import org.meridian.figure.spec.WaveformPanel;
 import org.meridian.maps.ColourLimits;
@@ -32,6 +34,8 @@ import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.ConditionWave;
 import org.meridian.signal.ConfidenceBand;
 import org.meridian.signal.GrandAverage;
+import org.meridian.span.FieldStatistics;
+import org.meridian.span.SpanAnalysis;
 import org.meridian.spline.SplineParameters;
 
 /**
@@ -50,12 +54,15 @@ public final class FigureContent {
     private final FigureSpec spec;
     private final List<PanelContent> panels;
     private final WaveScales waveScales;
+    private final WaveScales gfpScales;
     private final MapScales mapScales;
 
-    private FigureContent(FigureSpec spec, List<PanelContent> panels, WaveScales waveScales, MapScales mapScales) {
+    private FigureContent(FigureSpec spec, List<PanelContent> panels, WaveScales waveScales, WaveScales gfpScales,
+            MapScales mapScales) {
         this.spec = spec;
         this.panels = List.copyOf(panels);
         this.waveScales = waveScales;
+        this.gfpScales = gfpScales;
         this.mapScales = mapScales;
     }
 
@@ -71,6 +78,11 @@ public final class FigureContent {
     /** The waveform axes, or null when the figure has no waveform panel. */
     public WaveScales waveScales() {
         return waveScales;
+    }
+
+    /** The axes of the span-trace panels (GFP from 0), or null when there is none. */
+    public WaveScales gfpScales() {
+        return gfpScales;
     }
 
     /** The map scales, or null when the figure has no map strip. */
@@ -109,6 +121,8 @@ public final class FigureContent {
                 allMaps.addAll(strip.maps());
                 marks.addAll(marks(m));
                 out.add(strip);
+            } else if (p instanceof SpanTracePanel t) {
+                out.add(spanTrace(spec, study, t, waves, t0, t1));
             } else if (p instanceof ColourBarPanel) {
                 if (!anyStrip) {
                     throw new BadInputException(where + ": a colour bar needs a map strip in the figure");
@@ -118,8 +132,10 @@ public final class FigureContent {
         }
         WaveScales waveScales = out.stream().anyMatch(c -> c instanceof PanelContent.Waveforms)
                 ? waveScales(spec, study, out, t0, t1, axes.markMaps() ? marks : List.of()) : null;
+        WaveScales gfpScales = out.stream().anyMatch(c -> c instanceof PanelContent.SpanTrace)
+                ? gfpScales(spec, study, out, t0, t1, axes.markMaps() ? marks : List.of()) : null;
         MapScales mapScales = allMaps.isEmpty() ? null : mapScales(spec.maps(), allMaps);
-        return new FigureContent(spec, out, waveScales, mapScales);
+        return new FigureContent(spec, out, waveScales, gfpScales, mapScales);
     }
 
     private static String where(FigureSpec spec, int panelIndex) {
@@ -150,20 +166,12 @@ public final class FigureContent {
         } catch (BadInputException e) {
             throw new BadInputException(where + ".channels: " + e.getMessage(), e);
         }
-        List<ShownCondition> shown = new ArrayList<>();
-        for (ShownCondition c : spec.conditions()) {
-            if (panel.conditions() == null || panel.conditions().contains(c.wave())) {
-                shown.add(c);
-            }
-        }
+        List<ShownCondition> shown = picked(spec, panel.conditions());
         List<ConfidenceBand> bands = bands(spec, study, shown, waves, region);
         TimeAxis axis = study.axis();
-        int a = Math.max(0, (int) Math.ceil(axis.fractionalIndex(t0) - 1e-9));
-        int b = Math.min(axis.samples() - 1, (int) Math.floor(axis.fractionalIndex(t1) + 1e-9));
-        double[] times = new double[b - a + 1];
-        for (int s = a; s <= b; s++) {
-            times[s - a] = axis.timeMs(s);
-        }
+        int a = firstSample(axis, t0);
+        int b = lastSample(axis, t1);
+        double[] times = times(axis, a, b);
         List<WaveTrace> traces = new ArrayList<>();
         for (int k = 0; k < shown.size(); k++) {
             ShownCondition c = shown.get(k);
@@ -184,6 +192,77 @@ public final class FigureContent {
         }
         String title = panel.title() != null ? panel.title() : region.label();
         return new PanelContent.Waveforms(title, traces, panel.legend());
+    }
+
+    private static int firstSample(TimeAxis axis, double t0) {
+        return Math.max(0, (int) Math.ceil(axis.fractionalIndex(t0) - 1e-9));
+    }
+
+    private static int lastSample(TimeAxis axis, double t1) {
+        return Math.min(axis.samples() - 1, (int) Math.floor(axis.fractionalIndex(t1) + 1e-9));
+    }
+
+    private static double[] times(TimeAxis axis, int a, int b) {
+        double[] times = new double[b - a + 1];
+        for (int s = a; s <= b; s++) {
+            times[s - a] = axis.timeMs(s);
+        }
+        return times;
+    }
+
+    private static List<ShownCondition> picked(FigureSpec spec, List<String> wanted) {
+        List<ShownCondition> shown = new ArrayList<>();
+        for (ShownCondition c : spec.conditions()) {
+            if (wanted == null || wanted.contains(c.wave())) {
+                shown.add(c);
+            }
+        }
+        return shown;
+    }
+
+    /**
+     * GFP of each shown wave's grand average over the field channels (those with positions,
+     * as the span analysis uses): {@code span.FieldStatistics.gfp} sample by sample.
+     */
+    private static PanelContent.SpanTrace spanTrace(FigureSpec spec, Study study, SpanTracePanel panel,
+            Map<String, ConditionExpression> waves, double t0, double t1) {
+        TimeAxis axis = study.axis();
+        int a = firstSample(axis, t0);
+        int b = lastSample(axis, t1);
+        double[] times = times(axis, a, b);
+        List<String> field = SpanAnalysis.fieldChannels(study);
+        List<WaveTrace> traces = new ArrayList<>();
+        for (ShownCondition c : picked(spec, panel.conditions())) {
+            Waveforms average = GrandAverage.of(study, waves.get(c.wave()), GrandAverage.Weighting.UNWEIGHTED, Set.of())
+                    .select(field);
+            double[] map = new double[average.channelCount()];
+            double[] gfp = new double[times.length];
+            for (int s = a; s <= b; s++) {
+                average.sampleInto(s, map);
+                gfp[s - a] = FieldStatistics.gfp(map);
+            }
+            traces.add(new WaveTrace(c.label(), Color.decode(c.colour()), c.dashed(), times, gfp, null, null));
+        }
+        return new PanelContent.SpanTrace(panel.title(), traces, panel.legend());
+    }
+
+    private static WaveScales gfpScales(FigureSpec spec, Study study, List<PanelContent> panels, double t0,
+            double t1, List<double[]> marks) {
+        double max = 0;
+        for (PanelContent c : panels) {
+            if (c instanceof PanelContent.SpanTrace t) {
+                for (WaveTrace w : t.traces()) {
+                    for (double v : w.mean()) {
+                        max = Math.max(max, v);
+                    }
+                }
+            }
+        }
+        double step = amplitudeStep(0, max > 0 ? max : 1);
+        double hi = Math.max(step, Math.ceil(max / step - 1e-9) * step);
+        WaveScales waves = waveScales(spec, study, List.of(), t0, t1, marks);
+        return new WaveScales(t0, t1, waves.timeStepMs(), 0, hi, step, waves.timeLabel(),
+                "GFP (" + study.unit().symbol() + ")", Polarity.POSITIVE_UP, marks);
     }
 
     /**

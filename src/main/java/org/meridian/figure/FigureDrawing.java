@@ -15,7 +15,7 @@ import org.meridian.maps.Drawing;
  * drawing depends only on the spec and the data, so the window's preview and every export show
  * the same thing, and SVG output is the same bytes wherever it is made. In SVG each panel is a
  * group with id {@code panel-N} (N from 1 in reading order) and class {@code waveform-panel},
- * {@code map-strip} or {@code colour-bar}. Immutable.
+ * {@code map-strip}, {@code colour-bar} or {@code span-trace}. Immutable.
  */
 public final class FigureDrawing implements Drawing {
     private final FigureContent content;
@@ -84,6 +84,11 @@ public final class FigureDrawing implements Drawing {
                 WaveformPainter.draw(g, b, w, content.waveScales(), style, p.letter(), axisLabel, note,
                         legendLines.get(p.row()), content.spec().intervals().opacity().floatValue());
                 SvgGroups.end(g);
+            } else if (c instanceof PanelContent.SpanTrace t) {
+                SvgGroups.begin(g, id, "span-trace");
+                WaveformPainter.draw(g, b, t.asWaveforms(), content.gfpScales(), style, p.letter(), true, null,
+                        legendLines.getOrDefault(p.row(), 1), content.spec().intervals().opacity().floatValue());
+                SvgGroups.end(g);
             } else if (c instanceof PanelContent.MapStrip m) {
                 SvgGroups.begin(g, id, "map-strip");
                 MapStripPainter.draw(g, b, m, content.mapScales(), style, p.letter(), mapSide.get(p.row()), id);
@@ -102,7 +107,10 @@ public final class FigureDrawing implements Drawing {
     private Map<Integer, Integer> legendLines(Graphics2D g, String polarityHolder) {
         Map<Integer, Integer> out = new HashMap<>();
         for (Placed p : layout.placed()) {
-            if (content.panels().get(p.index()) instanceof PanelContent.Waveforms w) {
+            PanelContent c = content.panels().get(p.index());
+            PanelContent.Waveforms w = c instanceof PanelContent.Waveforms waves ? waves
+                    : c instanceof PanelContent.SpanTrace t ? t.asWaveforms() : null;
+            if (w != null) {
                 String id = "panel-" + (p.index() + 1);
                 String note = id.equals(polarityHolder) ? "(" + content.waveScales().polarity().words() + ")" : null;
                 int lines = WaveformPainter.legendFitsBesideTitle(g, p.boundsPt(), w, p.letter(), note, style) ? 1 : 2;

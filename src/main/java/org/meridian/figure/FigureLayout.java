@@ -8,6 +8,7 @@ import org.meridian.figure.spec.FigureSpec;
 import org.meridian.figure.spec.MapStripPanel;
 import org.meridian.figure.spec.PanelRow;
 import org.meridian.figure.spec.PanelSpec;
+import org.meridian.figure.spec.SpanTracePanel;
 import org.meridian.figure.spec.WaveformPanel;
 
 /**
@@ -15,7 +16,7 @@ import org.meridian.figure.spec.WaveformPanel;
  * bottom with {@value #GAP_MM} mm between them, panels left to right with {@value #GAP_MM} mm
  * between them, each panel's width in proportion to its {@code width} share, inside a margin of
  * {@value #MARGIN_MM} mm. A row's height is its {@code height_mm}, or else its natural height:
- * the tallest of its panels' — a waveform panel 0.75 × its width (30–60 mm), a map strip its
+ * the tallest of its panels' — a waveform or span-trace panel 0.75 × its width (30–60 mm), a map strip its
  * maps' side plus a title line and a time line, a colour bar alone 30 mm. When the spec fixes the
  * figure's height, the rows are scaled to fill it. Panels are lettered A, B, C … in reading
  * order (colour bars excepted). Immutable.
@@ -123,7 +124,7 @@ public final class FigureLayout {
         double h = 0;
         for (int i = 0; i < widths.length; i++) {
             PanelSpec p = row.panels().get(i);
-            if (p instanceof WaveformPanel) {
+            if (p instanceof WaveformPanel || p instanceof SpanTracePanel) {
                 h = Math.max(h, Math.max(30, Math.min(60, 0.75 * widths[i])));
             } else if (p instanceof MapStripPanel m) {
                 h = Math.max(h, mapSide(widths[i], m.mapCount()) + textBands(style));

@@ -22,6 +22,18 @@ public sealed interface PanelContent {
         }
     }
 
+    /** GFP traces of grand-average waves, drawn like waves on the GFP scale. */
+    record SpanTrace(String title, List<WaveTrace> traces, boolean legend) implements PanelContent {
+        public SpanTrace {
+            traces = List.copyOf(traces);
+        }
+
+        /** The same traces as a waveform panel's content, for the waveform painter. */
+        Waveforms asWaveforms() {
+            return new Waveforms(title, traces, legend);
+        }
+    }
+
     /** The shared colour bar. */
     record ColourBar() implements PanelContent {
     }

@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.stat.descriptive.DescriptiveStatistics;
+import org.apache.commons.math3.stat.descriptive.moment.StandardDeviation;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meridian.core.BadInputException;
@@ -86,6 +87,35 @@ class FigureContentTest {
         assertThat(contrast.dashed()).isTrue();
         assertThat(contrast.mean()[k]).isCloseTo(new DescriptiveStatistics(difference).getMean(), within(1e-4));
         assertThat(contrast.upper()[k] - contrast.mean()[k]).isCloseTo(tHalfWidth(difference), within(1e-4));
+    }
+
+    @Test
+    void aSpanTraceIsTheGlobalFieldPowerOfTheGrandAverage() {
+        String json = """
+                {"study": "s", "conditions": [{"wave": "rare"}, {"wave": "frequent"}],
+                 "rows": [{"panels": [{"type": "span-trace", "conditions": ["rare"]}]}]}
+                """;
+        FigureContent content = FigureContent.of(SpecFiles.parse(json, "g.json"), DemoFigures.study());
+        PanelContent.SpanTrace panel = (PanelContent.SpanTrace) content.panels().get(0);
+        WaveTrace gfp = panel.traces().get(0);
+        Study s = DemoFigures.study();
+        int sample = s.axis().nearestIndex(390);
+        int k = (int) Math.round((390 - gfp.timesMs()[0]) / s.axis().stepMs());
+        double[] map = new double[s.channelLabels().size()];
+        for (int c = 0; c < map.length; c++) {
+            double sum = 0;
+            for (int p = 0; p < s.participants().size(); p++) {
+                sum += s.waveforms(p, s.conditionIndex("rare")).value(c, sample);
+            }
+            map[c] = sum / s.participants().size();
+        }
+        // Lehmann & Skrandies (1980): GFP is the population standard deviation across channels
+        // (Commons Math StandardDeviation without the bias correction); the demo has 64 positioned channels
+        assertThat(gfp.mean()[k]).isCloseTo(new StandardDeviation(false).evaluate(map), within(1e-4));
+        assertThat(gfp.hasBand()).isFalse();
+        assertThat(panel.title()).isEqualTo("GFP");
+        assertThat(content.gfpScales().amplitudeFrom()).isZero();
+        assertThat(content.gfpScales().amplitudeLabel()).isEqualTo("GFP (µV)");
     }
 
     @Test

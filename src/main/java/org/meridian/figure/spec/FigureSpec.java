@@ -94,13 +94,15 @@ public record FigureSpec(@JsonProperty("version") Integer version,
         for (int r = 0; r < rows.size(); r++) {
             List<PanelSpec> panels = rows.get(r).panels();
             for (int p = 0; p < panels.size(); p++) {
-                if (panels.get(p) instanceof WaveformPanel w) {
+                List<String> picked = panels.get(p) instanceof WaveformPanel w ? w.conditions()
+                        : panels.get(p) instanceof SpanTracePanel t ? t.conditions() : null;
+                if (panels.get(p) instanceof WaveformPanel || panels.get(p) instanceof SpanTracePanel) {
                     String where = "rows[" + r + "].panels[" + p + "]";
                     if (conditions.isEmpty()) {
-                        throw new BadInputException(where + ": a waveform panel needs the figure's conditions "
-                                + "(the waves it shows, e.g. [{\"wave\": \"rare\"}])");
+                        throw new BadInputException(where + ": a waveform or span-trace panel needs the figure's "
+                                + "conditions (the waves it shows, e.g. [{\"wave\": \"rare\"}])");
                     }
-                    for (String wanted : w.conditions() == null ? List.<String>of() : w.conditions()) {
+                    for (String wanted : picked == null ? List.<String>of() : picked) {
                         if (conditions.stream().noneMatch(c -> c.wave().equals(wanted))) {
                             throw new BadInputException(where + ".conditions: \"" + wanted
                                     + "\" is not one of the figure's conditions ("

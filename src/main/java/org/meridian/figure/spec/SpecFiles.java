@@ -33,11 +33,13 @@ import org.meridian.io.AtomicFiles;
  * repeated key, a value of the wrong kind or out of range, trailing text — each is one line
  * naming the file, the line and column, and the JSON path of the value at fault, e.g.
  * {@code fig.json line 7 column 20 (rows[0].panels[1].type): no panel type "mapstrip" (types:
- * waveforms, map-strip, colour-bar)}. Writing is pretty-printed, two spaces, a final newline,
+ * waveforms, map-strip, colour-bar, span-trace)}. Writing is pretty-printed, two spaces, a final newline,
  * through {@code io.AtomicFiles}.
  */
 public final class SpecFiles {
     private static final ObjectMapper MAPPER = mapper();
+    private static final String PANEL_TYPES = String.join(", ", WaveformPanel.TYPE, MapStripPanel.TYPE,
+            ColourBarPanel.TYPE, SpanTracePanel.TYPE);
 
     private SpecFiles() {
     }
@@ -140,8 +142,8 @@ public final class SpecFiles {
             return "unknown field \"" + u.getPropertyName() + "\"" + known(u.getKnownPropertyIds());
         }
         if (e instanceof InvalidTypeIdException t) {
-            return t.getTypeId() == null ? "a panel needs a \"type\" (waveforms, map-strip or colour-bar)"
-                    : "no panel type \"" + t.getTypeId() + "\" (types: waveforms, map-strip, colour-bar)";
+            return t.getTypeId() == null ? "a panel needs a \"type\" (" + PANEL_TYPES + ")"
+                    : "no panel type \"" + t.getTypeId() + "\" (types: " + PANEL_TYPES + ")";
         }
         if (e instanceof ValueInstantiationException v) {
             Throwable cause = v.getCause();

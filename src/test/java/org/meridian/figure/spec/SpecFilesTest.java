@@ -92,7 +92,7 @@ class SpecFilesTest {
                 .doesNotContain("\n").contains("(font.size_pt)");
         assertThat(error(MINIMAL.replace("\"type\": \"map-strip\"", "\"type\": \"mapstrip\"")))
                 .doesNotContain("\n").contains("(rows[1].panels[0]")
-                .contains("no panel type \"mapstrip\" (types: waveforms, map-strip, colour-bar)");
+                .contains("no panel type \"mapstrip\" (types: waveforms, map-strip, colour-bar, span-trace)");
         assertThat(error(MINIMAL.replace("\"times_ms\": [300, 400]", "\"times_ms\": [300, 400], \"windows_ms\": [[1, 2]]")))
                 .doesNotContain("\n").contains("(rows[1].panels[0])")
                 .endsWith("a map strip needs either times_ms or windows_ms (not both)");
