@@ -20,6 +20,7 @@ import picocli.CommandLine.Option;
             MontageCommand.class,
             InfoCommand.class,
             SimulateCommand.class,
+            ViewCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;
@@ -32,8 +33,11 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        // no command: the window on the demo study, once the window exists
-        new CommandLine(this).usage(System.out);
+        try {
+            new ViewCommand().call();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     public static void main(String[] args) {

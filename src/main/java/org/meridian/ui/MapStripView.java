@@ -1,0 +1,66 @@
+package org.meridian.ui;
+
+import java.awt.Dimension;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.Rectangle2D;
+import javax.swing.JComponent;
+import org.meridian.maps.ColourLimits;
+import org.meridian.maps.MapStrip;
+import org.meridian.maps.MapStyle;
+
+/**
+ * The span view's map strip: maps evenly spaced across the window with one colour bar
+ * ({@link MapStrip}), in the colour range of the {@link ViewState} (automatic: the map wave's
+ * largest value over all samples, as the scalp map; symmetric: the strip's own largest value).
+ */
+final class MapStripView extends JComponent {
+    private final Workbench bench;
+    private SpanData data;
+
+    MapStripView(Workbench bench) {
+        this.bench = bench;
+        setName("span.strip");
+        setMinimumSize(new Dimension(200, 70));
+        setPreferredSize(new Dimension(600, 130));
+    }
+
+    void show(SpanData d) {
+        this.data = d;
+        repaint();
+    }
+
+    SpanData data() {
+        return data;
+    }
+
+    /** The limits the strip is drawn with. */
+    ColourLimits limits() {
+        Averages.WaveAverage w = bench.model().averages().wave(data.wave());
+        ColourRange r = bench.state().colourRange();
+        return switch (r.mode()) {
+            case AUTO -> ColourLimits.automatic(w == null ? data.stripMaxAbs() : w.maxAbs(data.quantity()));
+            case SYMMETRIC -> ColourLimits.automatic(data.stripMaxAbs());
+            case LOCKED -> ColourLimits.symmetric(r.limit());
+        };
+    }
+
+    @Override
+    protected void paintComponent(Graphics graphics) {
+        Graphics2D g = (Graphics2D) graphics.create();
+        try {
+            g.setColor(bench.theme().plotBackground());
+            g.fillRect(0, 0, getWidth(), getHeight());
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            if (data == null || data.strip().isEmpty()) {
+                return;
+            }
+            MapStyle style = MapStyle.defaults().withScale(bench.state().colourScale())
+                    .withHighlighted(bench.state().selectedChannels());
+            new MapStrip(data.strip(), limits(), style).draw(g, new Rectangle2D.Double(4, 2, getWidth() - 8, getHeight() - 4));
+        } finally {
+            g.dispose();
+        }
+    }
+}

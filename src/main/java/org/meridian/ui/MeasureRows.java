@@ -1,0 +1,137 @@
+package org.meridian.ui;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import javax.swing.table.AbstractTableModel;
+import org.meridian.measure.Measure;
+import org.meridian.measure.MeasureTable;
+
+/**
+ * The measure table as the window shows it: one row per participant (or grand average),
+ * condition and channel, one column per measure with its unit in the header. The tidy table
+ * ({@link MeasureTable}) stays the exported form; this is a view of it. A value that stands in
+ * for a missing one (a local peak that is the window maximum) is marked with an asterisk.
+ */
+final class MeasureRows extends AbstractTableModel {
+    static final String[] KEYS = {"Participant", "Condition", "Channel"};
+
+    /** Readable names of the measures, in the registry's order. */
+    private static final Map<String, String> TITLES = Map.of(
+            "mean", "Mean amplitude",
+            "peak", "Peak",
+            "peak-latency", "Peak latency",
+            "local-peak", "Local peak",
+            "local-peak-latency", "Local peak latency",
+            "area", "Area",
+            "frac-area-latency", "Fractional area latency",
+            "frac-peak-latency", "Fractional peak latency");
+
+    /** One row of the view: its keys and a value (or null) per measure column. */
+    private record ViewRow(String participant, String condition, String channel, Object[] values) {
+    }
+
+    private List<Measure> measures = List.of();
+    private List<String> units = List.of();
+    private List<ViewRow> rows = List.of();
+    private MeasureTable table;
+
+    /** Shows a table; grand-average rows only unless {@code participants}. */
+    void show(MeasureTable newTable, List<Measure> newMeasures, List<String> newUnits, boolean participants) {
+        this.table = newTable;
+        this.measures = List.copyOf(newMeasures);
+        this.units = List.copyOf(newUnits);
+        Map<String, ViewRow> byKey = new LinkedHashMap<>();
+        for (MeasureTable.Row r : newTable.rows()) {
+            if (!participants && !r.participant().equals(MeasureTable.GRAND)) {
+                continue;
+            }
+            String key = r.participant() + "\u0000" + r.condition() + "\u0000" + r.channel();
+            ViewRow v = byKey.computeIfAbsent(key, k -> new ViewRow(
+                    r.participant().equals(MeasureTable.GRAND) ? "grand average" : r.participant(),
+                    r.condition(), r.channel(), new Object[measures.size()]));
+            int base = r.measure().indexOf(" (");
+            String name = base < 0 ? r.measure() : r.measure().substring(0, base);
+            int column = indexOf(name);
+            if (column >= 0) {
+                v.values()[column] = r.isEmpty() ? null : new Value(r.value(), base >= 0);
+            }
+        }
+        List<ViewRow> grandLast = new ArrayList<>();
+        List<ViewRow> grand = new ArrayList<>();
+        for (ViewRow v : byKey.values()) {
+            (v.participant().equals("grand average") ? grand : grandLast).add(v);
+        }
+        grand.addAll(grandLast);
+        this.rows = grand;
+        fireTableStructureChanged();
+    }
+
+    MeasureTable table() {
+        return table;
+    }
+
+    private int indexOf(String name) {
+        for (int i = 0; i < measures.size(); i++) {
+            if (measures.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** A measured value; {@code standIn} when it replaces a missing one. */
+    record Value(double value, boolean standIn) implements Comparable<Value> {
+        @Override
+        public int compareTo(Value o) {
+            return Double.compare(value, o.value);
+        }
+
+        @Override
+        public String toString() {
+            String s = MeasureTable.formatValue(value);
+            return standIn ? s + " *" : s;
+        }
+    }
+
+    @Override
+    public int getRowCount() {
+        return rows.size();
+    }
+
+    @Override
+    public int getColumnCount() {
+        return KEYS.length + measures.size();
+    }
+
+    @Override
+    public String getColumnName(int column) {
+        if (column < KEYS.length) {
+            return KEYS[column];
+        }
+        Measure m = measures.get(column - KEYS.length);
+        return TITLES.getOrDefault(m.name(), m.name()) + " (" + units.get(column - KEYS.length) + ")";
+    }
+
+    @Override
+    public Class<?> getColumnClass(int column) {
+        return column < KEYS.length ? String.class : Value.class;
+    }
+
+    @Override
+    public Object getValueAt(int row, int column) {
+        ViewRow r = rows.get(row);
+        return switch (column) {
+            case 0 -> r.participant();
+            case 1 -> r.condition();
+            case 2 -> r.channel();
+            default -> r.values()[column - KEYS.length];
+        };
+    }
+
+    /** A measure's description, for the column's tool tip. */
+    String description(int column) {
+        return column < KEYS.length ? null : measures.get(column - KEYS.length).description();
+    }
+}

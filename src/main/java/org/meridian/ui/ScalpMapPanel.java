@@ -1,0 +1,285 @@
+package org.meridian.ui;
+
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.FlowLayout;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.Point;
+import java.awt.RenderingHints;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.awt.geom.AffineTransform;
+import java.awt.geom.NoninvertibleTransformException;
+import java.awt.geom.Point2D;
+import java.awt.geom.Rectangle2D;
+import java.util.Optional;
+import javax.swing.BorderFactory;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import org.meridian.maps.ColourBar;
+import org.meridian.maps.ColourLimits;
+import org.meridian.maps.MapGrid;
+import org.meridian.maps.MapMaker;
+import org.meridian.maps.MapMoment;
+import org.meridian.maps.MapRenderer;
+import org.meridian.maps.MapStyle;
+import org.meridian.maps.ScalpMap;
+
+/**
+ * The scalp map of the map wave at the time cursor (or the window's mean), potential or CSD,
+ * with its colour bar; above it, which wave, quantity and time it shows. Hovering names the
+ * nearest electrode and the value under the mouse; clicking an electrode makes its channel the
+ * current one; the selected channels are marked on the map.
+ *
+ * <p>A frame is one matrix–vector product on the live grid of {@link StudySession#LIVE_RESOLUTION}
+ * pixels (precomputed weights) drawn by the same {@link MapRenderer} as every figure, so a
+ * frame costs about a millisecond and scrubbing stays smooth.
+ */
+final class ScalpMapPanel extends JPanel {
+    private final Workbench bench;
+    private final JComboBox<String> wave = new JComboBox<>();
+    private final JComboBox<MapMomentMode> moment = new JComboBox<>(MapMomentMode.values());
+    private final JLabel timeLabel = new JLabel(" ");
+    private final Canvas canvas = new Canvas();
+    private boolean updating;
+    private ScalpMap current;
+    private ColourLimits limits;
+    private Rectangle2D mapBounds = new Rectangle2D.Double();
+
+    ScalpMapPanel(Workbench bench) {
+        super(new BorderLayout());
+        this.bench = bench;
+        setName("map");
+        setMinimumSize(new Dimension(220, 220));
+        JPanel header = new JPanel(new BorderLayout());
+        header.setBorder(BorderFactory.createEmptyBorder(2, 6, 0, 6));
+        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 2));
+        JLabel title = new JLabel("Scalp map");
+        title.putClientProperty("FlatLaf.styleClass", "h4");
+        row.add(title);
+        wave.setName("map.wave");
+        wave.setToolTipText("The wave the scalp map and the span view show");
+        wave.addActionListener(e -> {
+            if (!updating && wave.getSelectedItem() != null) {
+                bench.state().setMapWave((String) wave.getSelectedItem());
+            }
+        });
+        moment.setName("map.moment");
+        moment.setToolTipText("Map at the time cursor, or the mean over the window");
+        moment.addActionListener(e -> {
+            if (!updating) {
+                bench.state().setMoment((MapMomentMode) moment.getSelectedItem());
+            }
+        });
+        row.add(wave);
+        row.add(moment);
+        header.add(row, BorderLayout.NORTH);
+        timeLabel.setName("map.time");
+        timeLabel.setHorizontalAlignment(JLabel.CENTER);
+        timeLabel.setFont(timeLabel.getFont().deriveFont(Font.BOLD, timeLabel.getFont().getSize2D() + 1f));
+        header.add(timeLabel, BorderLayout.SOUTH);
+        add(header, BorderLayout.NORTH);
+        canvas.setName("map.canvas");
+        add(canvas, BorderLayout.CENTER);
+
+        bench.state().addListener((s, what) -> {
+            if (what.contains(ViewState.Aspect.WAVES) || what.contains(ViewState.Aspect.MAP_WAVE)
+                    || what.contains(ViewState.Aspect.MOMENT)) {
+                refreshControls();
+            }
+            current = null;
+            updateLabel();
+            canvas.repaint();
+        });
+        bench.model().addListener((m, what) -> {
+            if (what.contains(ViewModel.Change.CATALOGUE) || what.contains(ViewModel.Change.SESSION)) {
+                refreshControls();
+            }
+            current = null;
+            updateLabel();
+            canvas.repaint();
+        });
+        bench.addThemeListener(t -> canvas.repaint());
+    }
+
+    /** The text above the map, e.g. {@code rare − frequent · Potential · 352 ms}. */
+    String timeText() {
+        return timeLabel.getText();
+    }
+
+    /** The screen point of an electrode on the map (for tests), or null. */
+    Point electrodePoint(String label) {
+        StudySession s = bench.model().session();
+        if (s == null || !s.hasMaps()) {
+            return null;
+        }
+        int i = s.layout().labels().stream().map(String::toLowerCase).toList().indexOf(label.toLowerCase());
+        if (i < 0) {
+            return null;
+        }
+        double[] p = s.layout().position(i);
+        Point2D d = MapRenderer.planeToDevice(mapBounds, s.layout()).transform(new Point2D.Double(p[0], p[1]), null);
+        return new Point((int) Math.round(d.getX()), (int) Math.round(d.getY()));
+    }
+
+    Canvas canvas() {
+        return canvas;
+    }
+
+    /** The colour limits of the map last drawn, or null. */
+    ColourLimits limits() {
+        return limits;
+    }
+
+    private void refreshControls() {
+        updating = true;
+        try {
+            wave.removeAllItems();
+            for (WaveEntry e : bench.model().catalogue()) {
+                wave.addItem(e.name());
+            }
+            wave.setSelectedItem(bench.state().mapWave());
+            moment.setSelectedItem(bench.state().moment());
+        } finally {
+            updating = false;
+        }
+    }
+
+    private void updateLabel() {
+        ViewState s = bench.state();
+        String when = s.moment() == MapMomentMode.CURSOR ? Texts.ms(s.cursorMs())
+                : "mean " + Texts.window(s.windowStartMs(), s.windowEndMs());
+        timeLabel.setText(s.mapWave() + "  ·  " + s.quantity().word() + "  ·  " + when);
+    }
+
+    /** Computes the map of the current state (about a millisecond), or null when there is none. */
+    private ScalpMap computeMap() {
+        StudySession session = bench.model().session();
+        ViewState s = bench.state();
+        Averages.WaveAverage w = bench.model().averages().wave(s.mapWave());
+        if (session == null || !session.hasMaps() || w == null) {
+            return null;
+        }
+        MapQuantity q = s.quantity() == MapQuantity.CSD && !session.hasCsd() ? MapQuantity.POTENTIAL : s.quantity();
+        MapMaker maker = session.maker(q.quantity(), StudySession.LIVE_RESOLUTION);
+        MapMoment m = s.moment() == MapMomentMode.CURSOR ? MapMoment.at(s.cursorMs())
+                : MapMoment.window(s.windowStartMs(), s.windowEndMs());
+        int[] rows = maker.spline().rowsIn(w.grand());
+        ScalpMap map = maker.map(m.valuesOf(w.grand(), rows), w.grand().unit(), m.label());
+        limits = switch (s.colourRange().mode()) {
+            case AUTO -> ColourLimits.automatic(w.maxAbs(q));
+            case SYMMETRIC -> ColourLimits.automatic(map.maxAbs());
+            case LOCKED -> ColourLimits.symmetric(s.colourRange().limit());
+        };
+        return map;
+    }
+
+    /** The map, its colour bar and the electrodes; hover and click go to the state. */
+    final class Canvas extends JComponent {
+        Canvas() {
+            setOpaque(true);
+            MouseAdapter mouse = new MouseAdapter() {
+                @Override
+                public void mouseMoved(MouseEvent e) {
+                    hover(e.getPoint());
+                }
+
+                @Override
+                public void mouseClicked(MouseEvent e) {
+                    electrodeAt(e.getPoint()).ifPresent(label -> {
+                        if (e.isControlDown() || e.isMetaDown()) {
+                            bench.state().toggleChannel(label);
+                        } else {
+                            bench.state().selectChannel(label);
+                        }
+                    });
+                }
+
+                @Override
+                public void mouseExited(MouseEvent e) {
+                    bench.pointer("", "", "");
+                }
+            };
+            addMouseListener(mouse);
+            addMouseMotionListener(mouse);
+        }
+
+        @Override
+        protected void paintComponent(Graphics graphics) {
+            Graphics2D g = (Graphics2D) graphics.create();
+            try {
+                Theme theme = bench.theme();
+                g.setColor(theme.plotBackground());
+                g.fillRect(0, 0, getWidth(), getHeight());
+                g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+                StudySession session = bench.model().session();
+                if (session != null && !session.hasMaps()) {
+                    g.setColor(theme.ink());
+                    g.drawString("No scalp map: " + session.whyNoMaps(), 8, 20);
+                    return;
+                }
+                if (current == null) {
+                    current = computeMap();
+                }
+                if (current == null) {
+                    return;
+                }
+                double barWidth = Math.max(56, Math.min(90, getWidth() * 0.18));
+                double side = Math.max(10, Math.min(getWidth() - barWidth - 12, getHeight() - 12));
+                double x = Math.max(6, (getWidth() - barWidth - side) / 2);
+                double y = Math.max(6, (getHeight() - side) / 2);
+                mapBounds = new Rectangle2D.Double(x, y, side, side);
+                MapStyle style = MapStyle.defaults().withScale(bench.state().colourScale())
+                        .withHighlighted(bench.state().selectedChannels());
+                MapRenderer.draw(g, mapBounds, current, limits, style);
+                Rectangle2D bar = new Rectangle2D.Double(x + side + 8, y + side * 0.1, barWidth - 8, side * 0.8);
+                ColourBar.draw(g, bar, style.scale(), limits, unitLabel(), 1.0);
+            } finally {
+                g.dispose();
+            }
+        }
+
+        private String unitLabel() {
+            return current.unitLabel();
+        }
+
+        private Optional<String> electrodeAt(Point p) {
+            StudySession s = bench.model().session();
+            if (s == null || !s.hasMaps() || mapBounds.isEmpty()) {
+                return Optional.empty();
+            }
+            double tolerance = Math.max(6, mapBounds.getWidth() * 0.03);
+            return MapRenderer.electrodeAt(mapBounds, s.layout(), p, tolerance);
+        }
+
+        private void hover(Point p) {
+            if (current == null || mapBounds.isEmpty()) {
+                return;
+            }
+            AffineTransform t = MapRenderer.planeToDevice(mapBounds, current.layout());
+            Point2D plane;
+            try {
+                plane = t.inverseTransform(p, null);
+            } catch (NoninvertibleTransformException e) {
+                return;
+            }
+            MapGrid grid = current.grid();
+            int col = (int) Math.round(grid.column(plane.getX()));
+            int row = (int) Math.round(grid.row(plane.getY()));
+            String time = current.title();
+            String channel = electrodeAt(p).orElse("");
+            if (col < 0 || row < 0 || col >= grid.size() || row >= grid.size()
+                    || Float.isNaN(current.value(col, row))) {
+                bench.pointer(time, channel, "");
+                return;
+            }
+            String unit = current.unitLabel().startsWith("CSD") ? "µV/m²" : current.unitLabel();
+            bench.pointer(time, channel, Texts.value(current.value(col, row), unit));
+        }
+    }
+}
