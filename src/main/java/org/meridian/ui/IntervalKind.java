@@ -6,9 +6,9 @@ package org.meridian.ui;
  * the within-participant interval of that difference.
  */
 public enum IntervalKind {
-    NONE("No interval"),
-    ACROSS("95 % t-interval"),
-    WITHIN("95 % within participants (Cousineau–Morey)");
+    NONE("No band"),
+    ACROSS("95 % CI"),
+    WITHIN("95 % CI within participants");
 
     private final String label;
 

@@ -56,9 +56,15 @@ final class MapStripView extends JComponent {
             if (data == null || data.strip().isEmpty()) {
                 return;
             }
+            int n = data.strip().size();
+            double w = getWidth() - 8;
+            double h = getHeight() - 4;
+            double side = Math.min(w / (n + (n - 1) * 0.06 + 0.5), h / 1.16);
+            double readable = ChartStyle.tickFont().getSize2D() / (0.07 * side);
             MapStyle style = MapStyle.defaults().withScale(bench.state().colourScale())
-                    .withHighlighted(bench.state().selectedChannels());
-            new MapStrip(data.strip(), limits(), style).draw(g, new Rectangle2D.Double(4, 2, getWidth() - 8, getHeight() - 4));
+                    .withHighlighted(bench.state().selectedChannels())
+                    .withSizeFactor(Math.max(1, readable));
+            new MapStrip(data.strip(), limits(), style).draw(g, new Rectangle2D.Double(4, 2, w, h));
         } finally {
             g.dispose();
         }

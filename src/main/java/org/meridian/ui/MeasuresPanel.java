@@ -66,7 +66,7 @@ final class MeasuresPanel extends JPanel {
         setMinimumSize(new Dimension(220, 140));
         JPanel header = new JPanel(new BorderLayout());
         header.setBorder(BorderFactory.createEmptyBorder(2, 6, 2, 6));
-        JPanel top = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 2));
+        JPanel top = new JPanel(new WrapLayout(4, 2));
         JLabel title = new JLabel("Measures");
         title.putClientProperty("FlatLaf.styleClass", "h4");
         top.add(title);

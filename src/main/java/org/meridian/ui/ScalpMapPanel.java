@@ -58,7 +58,7 @@ final class ScalpMapPanel extends JPanel {
         setMinimumSize(new Dimension(220, 220));
         JPanel header = new JPanel(new BorderLayout());
         header.setBorder(BorderFactory.createEmptyBorder(2, 6, 0, 6));
-        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 2));
+        JPanel row = new JPanel(new WrapLayout(4, 2));
         JLabel title = new JLabel("Scalp map");
         title.putClientProperty("FlatLaf.styleClass", "h4");
         row.add(title);

@@ -58,13 +58,13 @@ final class SpanPanel extends JPanel {
 
         JPanel header = new JPanel(new BorderLayout());
         header.setBorder(BorderFactory.createEmptyBorder(2, 6, 0, 6));
-        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 2));
+        JPanel row = new JPanel(new WrapLayout(4, 2));
         JLabel title = new JLabel("Span view");
         title.putClientProperty("FlatLaf.styleClass", "h4");
         row.add(title);
         scope.setName("span.scope");
         row.add(scope);
-        row.add(new JLabel("   Maps:"));
+        row.add(new JLabel("  Maps:"));
         count.setName("span.count");
         count.setToolTipText("How many maps the strip spreads evenly across the window");
         count.addChangeListener(e -> recompute());
@@ -87,11 +87,22 @@ final class SpanPanel extends JPanel {
         header.add(result, BorderLayout.SOUTH);
         add(header, BorderLayout.NORTH);
 
-        JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, true, traces, matrix);
-        lower.setResizeWeight(1.0);
+        JSplitPane lower = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, true, traces, matrix) {
+            private boolean placed;
+
+            @Override
+            public void doLayout() {
+                if (!placed && getWidth() > 0) {
+                    placed = true;
+                    setDividerLocation(Math.max(200, getWidth() - Math.min(300, getWidth() / 3)));
+                }
+                super.doLayout();
+            }
+        };
+        lower.setResizeWeight(0.7);
         lower.setBorder(BorderFactory.createEmptyBorder());
         JSplitPane body = new JSplitPane(JSplitPane.VERTICAL_SPLIT, true, strip, lower);
-        body.setResizeWeight(0.35);
+        body.setResizeWeight(0.4);
         body.setBorder(BorderFactory.createEmptyBorder());
         add(body, BorderLayout.CENTER);
 

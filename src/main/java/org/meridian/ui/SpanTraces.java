@@ -61,8 +61,9 @@ final class SpanTraces {
         reference.setLabel("reference");
         reference.setLabelFont(ChartStyle.tickFont());
         reference.setLabelPaint(theme.faint());
-        reference.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-        reference.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+        reference.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
+        reference.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+        reference.setLabelBackgroundColor(new Color(0, 0, 0, 0));
         gfpPlot.addDomainMarker(reference, Layer.BACKGROUND);
 
         XYSeries diss = new XYSeries("DISS", false, false);

@@ -59,7 +59,7 @@ final class WaveformPanel extends JPanel {
     }
 
     private JPanel header() {
-        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEFT, 4, 2));
+        JPanel row = new JPanel(new WrapLayout(4, 2));
         row.setBorder(BorderFactory.createEmptyBorder(2, 4, 0, 4));
         JLabel title = new JLabel("Waveforms");
         title.putClientProperty("FlatLaf.styleClass", "h4");
@@ -77,9 +77,11 @@ final class WaveformPanel extends JPanel {
         }
         intervals.setName("waveforms.intervals");
         intervals.setSelectedItem(bench.model().intervals());
-        intervals.setToolTipText("The band drawn around each grand average in the one-channel plot");
+        intervals.setToolTipText("<html>The band around each grand average: a 95 % t-interval across participants,"
+                + "<br>or the within-participant interval of Cousineau (2005) with Morey's (2008) correction"
+                + "<br>for the shown conditions together (a contrast keeps the t-interval of its own differences)</html>");
         intervals.addActionListener(e -> bench.model().setIntervals((IntervalKind) intervals.getSelectedItem()));
-        row.add(new JLabel("  Interval:"));
+        row.add(new JLabel("  Band:"));
         row.add(intervals);
         return row;
     }
