@@ -25,6 +25,7 @@ import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
 import javax.swing.TransferHandler;
 import javax.swing.text.JTextComponent;
+import org.meridian.core.Study;
 
 /**
  * The main window (DESIGN §10): the study on the left; the waveform view with the span view
@@ -135,10 +136,20 @@ public final class MainWindow extends JFrame {
     /** Opens a study in the background; a study already open stays until the new one is ready. */
     public void open(Path path, ViewOptions options) {
         String name = path == null ? "the demo study" : StudyOpener.titleOf(path);
+        IntervalKind intervals = bench.model().intervals();
+        open(name, p -> StudyOpener.run(path, options, intervals, p));
+    }
+
+    /** Shows a study held in memory (a simulation, say) under a title. */
+    public void open(Study study, String title, ViewOptions options) {
+        IntervalKind intervals = bench.model().intervals();
+        open(title, p -> StudyOpener.prepare(StudySession.of(study, null, title), options, intervals, p));
+    }
+
+    private void open(String name, Tasks.Job<StudyOpener.Opened> job) {
         openStartedNanos = System.nanoTime();
         bench.message("opening " + name + " …");
-        bench.tasks().submit("open", "Opening " + name,
-                p -> StudyOpener.run(path, options, bench.model().intervals(), p),
+        bench.tasks().submit("open", "Opening " + name, job,
                 opened -> {
                     bench.model().open(opened.session(), opened.entries(), opened.averages(), opened.defaults());
                     lastOpenMillis = (System.nanoTime() - openStartedNanos) / 1_000_000;
@@ -208,9 +219,14 @@ public final class MainWindow extends JFrame {
         bench.state().setQuantity(bench.state().quantity().other());
     }
 
+    /** Moves the cursor to the sample nearest to {@code ms} away, and by at least one sample. */
     private void stepMs(double ms) {
-        int samples = (int) Math.max(1, Math.round(ms / bench.state().axis().stepMs() * Math.signum(ms)));
-        bench.state().stepCursor((int) Math.signum(ms) * samples);
+        ViewState s = bench.state();
+        int before = s.cursorSample();
+        s.setCursorMs(s.cursorMs() + ms);
+        if (s.cursorSample() == before) {
+            s.stepCursor(ms > 0 ? 1 : -1);
+        }
     }
 
     private void bind(InputMap in, ActionMap act, String key, String name, Runnable r) {

@@ -28,17 +28,28 @@ final class MeasureRows extends AbstractTableModel {
             "frac-area-latency", "Fractional area latency",
             "frac-peak-latency", "Fractional peak latency");
 
-    /** One row of the view: its keys and a value (or null) per measure column. */
-    private record ViewRow(String participant, String condition, String channel, Object[] values) {
+    /** One row of the view: its keys, a value (or null) per measure column, and its wave. */
+    private record ViewRow(String participant, String condition, String channel, Object[] values,
+            float[] series) {
+    }
+
+    /** The wave behind each row, to read the value at the time cursor. */
+    interface Series {
+        /** The samples of a participant's ({@code grand}: the grand average's) wave at a channel, or null. */
+        float[] of(String participant, String condition, String channel);
     }
 
     private List<Measure> measures = List.of();
     private List<String> units = List.of();
     private List<ViewRow> rows = List.of();
     private MeasureTable table;
+    private int cursorSample = -1;
+    private String cursorTitle = "At cursor";
+    private String dataUnit = "µV";
 
     /** Shows a table; grand-average rows only unless {@code participants}. */
-    void show(MeasureTable newTable, List<Measure> newMeasures, List<String> newUnits, boolean participants) {
+    void show(MeasureTable newTable, List<Measure> newMeasures, List<String> newUnits, boolean participants,
+            Series series) {
         this.table = newTable;
         this.measures = List.copyOf(newMeasures);
         this.units = List.copyOf(newUnits);
@@ -50,7 +61,8 @@ final class MeasureRows extends AbstractTableModel {
             String key = r.participant() + "\u0000" + r.condition() + "\u0000" + r.channel();
             ViewRow v = byKey.computeIfAbsent(key, k -> new ViewRow(
                     r.participant().equals(MeasureTable.GRAND) ? "grand average" : r.participant(),
-                    r.condition(), r.channel(), new Object[measures.size()]));
+                    r.condition(), r.channel(), new Object[measures.size()],
+                    series.of(r.participant(), r.condition(), r.channel())));
             int base = r.measure().indexOf(" (");
             String name = base < 0 ? r.measure() : r.measure().substring(0, base);
             int column = indexOf(name);
@@ -70,6 +82,21 @@ final class MeasureRows extends AbstractTableModel {
 
     MeasureTable table() {
         return table;
+    }
+
+    /** Moves the "at cursor" column to a sample; its title names the time. */
+    void cursor(int sample, String timeText, String unit) {
+        this.cursorSample = sample;
+        this.cursorTitle = "At " + timeText;
+        this.dataUnit = unit;
+        if (!rows.isEmpty()) {
+            fireTableChanged(new javax.swing.event.TableModelEvent(this, 0, rows.size() - 1, KEYS.length));
+        }
+    }
+
+    /** The title of the "at cursor" column, e.g. {@code At 352 ms (µV)}. */
+    String cursorColumnName() {
+        return cursorTitle + " (" + dataUnit + ")";
     }
 
     private int indexOf(String name) {
@@ -102,7 +129,7 @@ final class MeasureRows extends AbstractTableModel {
 
     @Override
     public int getColumnCount() {
-        return KEYS.length + measures.size();
+        return KEYS.length + 1 + measures.size();
     }
 
     @Override
@@ -110,8 +137,11 @@ final class MeasureRows extends AbstractTableModel {
         if (column < KEYS.length) {
             return KEYS[column];
         }
-        Measure m = measures.get(column - KEYS.length);
-        return TITLES.getOrDefault(m.name(), m.name()) + " (" + units.get(column - KEYS.length) + ")";
+        if (column == KEYS.length) {
+            return "At cursor (" + dataUnit + ")";
+        }
+        Measure m = measures.get(column - KEYS.length - 1);
+        return TITLES.getOrDefault(m.name(), m.name()) + " (" + units.get(column - KEYS.length - 1) + ")";
     }
 
     @Override
@@ -126,12 +156,17 @@ final class MeasureRows extends AbstractTableModel {
             case 0 -> r.participant();
             case 1 -> r.condition();
             case 2 -> r.channel();
-            default -> r.values()[column - KEYS.length];
+            case 3 -> r.series() == null || cursorSample < 0 || cursorSample >= r.series().length ? null
+                    : new Value(r.series()[cursorSample], false);
+            default -> r.values()[column - KEYS.length - 1];
         };
     }
 
     /** A measure's description, for the column's tool tip. */
     String description(int column) {
-        return column < KEYS.length ? null : measures.get(column - KEYS.length).description();
+        if (column == KEYS.length) {
+            return cursorTitle + ": the wave's value at the time cursor";
+        }
+        return column < KEYS.length ? null : measures.get(column - KEYS.length - 1).description();
     }
 }

@@ -8,7 +8,9 @@ import java.awt.datatransfer.StringSelection;
 import java.awt.event.MouseEvent;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
@@ -20,7 +22,9 @@ import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.table.JTableHeader;
 import javax.swing.table.TableRowSorter;
+import org.meridian.core.Study;
 import org.meridian.core.Unit;
+import org.meridian.core.Waveforms;
 import org.meridian.io.AtomicFiles;
 import org.meridian.measure.Measure;
 import org.meridian.measure.MeasureRequest;
@@ -29,6 +33,8 @@ import org.meridian.measure.MeasureTable;
 import org.meridian.measure.Measurement;
 import org.meridian.measure.Measures;
 import org.meridian.measure.Polarity;
+import org.meridian.signal.ConditionWave;
+import org.meridian.signal.GrandAverage;
 import org.meridian.signal.TimeWindow;
 
 /**
@@ -58,6 +64,7 @@ final class MeasuresPanel extends JPanel {
     private final JComboBox<Polarity> polarity = new JComboBox<>(new Polarity[] {Polarity.POSITIVE, Polarity.NEGATIVE});
     private final JCheckBox participants = new JCheckBox("Participants");
     private final JLabel warnings = new JLabel();
+    private Result last;
 
     MeasuresPanel(Workbench bench) {
         super(new BorderLayout());
@@ -113,6 +120,8 @@ final class MeasuresPanel extends JPanel {
             if (what.contains(ViewState.Aspect.WINDOW) || what.contains(ViewState.Aspect.CHANNELS)
                     || what.contains(ViewState.Aspect.WAVES) || what.contains(ViewState.Aspect.PARTICIPANTS)) {
                 recompute();
+            } else if (what.contains(ViewState.Aspect.CURSOR)) {
+                followCursor();
             }
         });
     }
@@ -159,18 +168,74 @@ final class MeasuresPanel extends JPanel {
         }
         String channels = String.join(", ", s.selectedChannels());
         String scopeText = Texts.window(s.windowStartMs(), s.windowEndMs()) + "  ·  " + channels;
-        bench.tasks().submit("measures", "Measures", p -> Measurement.run(session.study(), request),
+        bench.tasks().submit("measures", "Measures",
+                p -> new Result(Measurement.run(session.study(), request), series(session, request)),
                 result -> {
-                    rows.show(result, measures, units, participants.isSelected());
+                    last = result;
+                    rows.show(result.table(), measures, units, participants.isSelected(), result::seriesOf);
                     scope.setText(scopeText);
-                    showWarnings(result);
+                    showWarnings(result.table());
+                    followCursor();
                     sizeColumns();
                 }, bench::report);
     }
 
+    /** A measure table and the wave behind each of its rows. */
+    private record Result(MeasureTable table, Map<String, float[]> series) {
+        float[] seriesOf(String participant, String condition, String channel) {
+            return series.get(key(participant, condition, channel));
+        }
+    }
+
+    private static String key(String participant, String condition, String channel) {
+        return participant + "\u0000" + condition + "\u0000" + channel.toLowerCase(java.util.Locale.ROOT);
+    }
+
+    /** Each row's wave (participants' and grand average's), for the value at the cursor. */
+    private static Map<String, float[]> series(StudySession session, MeasureRequest request) {
+        Map<String, float[]> out = new HashMap<>();
+        Study study = session.study();
+        for (ConditionWave wave : request.conditions()) {
+            Waveforms grand = GrandAverage.of(study, wave, request.weighting(), request.excluded());
+            for (String ch : request.channels()) {
+                int c = grand.indexOf(ch);
+                if (c >= 0) {
+                    out.put(key(MeasureTable.GRAND, wave.name(), ch), grand.channel(c));
+                }
+            }
+            for (int p = 0; p < study.participants().size(); p++) {
+                String name = study.participants().get(p);
+                if (GrandAverage.isExcluded(name, request.excluded())) {
+                    continue;
+                }
+                Waveforms w = wave.forParticipant(study, p);
+                for (String ch : request.channels()) {
+                    int c = w.indexOf(ch);
+                    if (c >= 0) {
+                        out.put(key(name, wave.name(), ch), w.channel(c));
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    private void followCursor() {
+        ViewState s = bench.state();
+        StudySession session = bench.model().session();
+        rows.cursor(s.cursorSample(), Texts.ms(s.cursorMs()),
+                session == null ? "µV" : session.study().unit().symbol());
+        table.repaint();
+    }
+
+    /** The title of the value-at-cursor column's tool tip, e.g. {@code At 352 ms}. */
+    String cursorText() {
+        return rows.cursorColumnName();
+    }
+
     private void showTable(MeasureTable t) {
-        if (t != null) {
-            rows.show(t, Measures.all(), currentUnits(), participants.isSelected());
+        if (t != null && last != null) {
+            rows.show(t, Measures.all(), currentUnits(), participants.isSelected(), last::seriesOf);
             sizeColumns();
         }
     }

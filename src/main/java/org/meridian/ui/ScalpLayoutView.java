@@ -47,9 +47,11 @@ final class ScalpLayoutView extends JComponent {
         setName("waveforms.layout");
         setOpaque(true);
         setMinimumSize(new Dimension(200, 160));
+        setFocusable(true);
         MouseAdapter mouse = new MouseAdapter() {
             @Override
             public void mousePressed(MouseEvent e) {
+                requestFocusInWindow();
                 Slot s = slotAt(e.getPoint());
                 dragging = s;
                 if (s == null) {

@@ -131,6 +131,11 @@ final class ScalpMapPanel extends JPanel {
         return canvas;
     }
 
+    /** The unit of the map last drawn, as its colour bar names it (for tests), or "". */
+    String unitText() {
+        return current == null ? "" : current.unitLabel();
+    }
+
     /** The colour limits of the map last drawn, or null. */
     ColourLimits limits() {
         return limits;
@@ -183,10 +188,16 @@ final class ScalpMapPanel extends JPanel {
     final class Canvas extends JComponent {
         Canvas() {
             setOpaque(true);
+            setFocusable(true);
             MouseAdapter mouse = new MouseAdapter() {
                 @Override
                 public void mouseMoved(MouseEvent e) {
                     hover(e.getPoint());
+                }
+
+                @Override
+                public void mousePressed(MouseEvent e) {
+                    requestFocusInWindow();
                 }
 
                 @Override

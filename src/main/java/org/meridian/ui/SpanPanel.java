@@ -37,7 +37,7 @@ final class SpanPanel extends JPanel {
     private final JLabel scope = new JLabel(" ");
     private final JSpinner count = new JSpinner(new SpinnerNumberModel(DEFAULT_MAPS, 2, 12, 1));
     private final JSpinner patterns = new JSpinner(new SpinnerNumberModel(SpanSettings.DEFAULT_PERMUTATIONS,
-            100, 100_000_000, 1000));
+            99, 10_000_000, 1000));
     private final JButton run = new JButton("Run span test");
     private final JLabel result = new JLabel(" ");
     private final MapStripView strip;

@@ -44,6 +44,12 @@ final class StudyOpener {
             Study study = StudyLoader.load(path, progress);
             session = StudySession.of(study, path, titleOf(path));
         }
+        return prepare(session, options, intervals, progress);
+    }
+
+    /** Prepares a study already in memory: map weights, the view's start, the first averages. */
+    static Opened prepare(StudySession session, ViewOptions options, IntervalKind intervals,
+            Tasks.TaskProgress progress) {
         progress.checkCancelled();
         session.warmUp();
         progress.checkCancelled();

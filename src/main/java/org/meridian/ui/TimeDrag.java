@@ -38,12 +38,14 @@ final class TimeDrag extends MouseAdapter {
     }
 
     void install() {
+        plot.setFocusable(true);
         plot.addMouseListener(this);
         plot.addMouseMotionListener(this);
     }
 
     @Override
     public void mousePressed(MouseEvent e) {
+        plot.requestFocusInWindow();
         if (e.getButton() != MouseEvent.BUTTON1 || !inTimeArea.test(e)) {
             grip = null;
             return;

@@ -163,12 +163,9 @@ public final class ViewState {
         }
     }
 
-    /** Makes one channel current: it moves to the front of the selection (added when absent). */
+    /** Selects one channel alone (a plain click on it). */
     public void selectChannel(String channel) {
-        List<String> next = new ArrayList<>(selectedChannels);
-        next.removeIf(channel::equalsIgnoreCase);
-        next.add(0, channel);
-        setSelectedChannels(next);
+        setSelectedChannels(List.of(channel));
     }
 
     /** Adds a channel to the selection, or removes it when it is there and not the only one. */
