@@ -4,7 +4,6 @@ import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
-import java.awt.FontMetrics;
 import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.Point;
@@ -184,6 +183,24 @@ final class ScalpMapPanel extends JPanel {
         return map;
     }
 
+    /**
+     * Draws one frame of the live map into a panel of the given size: the map in the largest
+     * square that leaves room for the colour bar on its right. Returns the map's bounds. The
+     * repaint path of the panel, and what {@code MapFrameBench} times.
+     */
+    static Rectangle2D paintFrame(Graphics2D g, double width, double height, ScalpMap map,
+            ColourLimits limits, MapStyle style) {
+        double barWidth = Math.max(56, Math.min(90, width * 0.18));
+        double side = Math.max(10, Math.min(width - barWidth - 12, height - 12));
+        double x = Math.max(6, (width - barWidth - side) / 2);
+        double y = Math.max(6, (height - side) / 2);
+        Rectangle2D bounds = new Rectangle2D.Double(x, y, side, side);
+        MapRenderer.draw(g, bounds, map, limits, style);
+        Rectangle2D bar = new Rectangle2D.Double(x + side + 8, y + side * 0.1, barWidth - 8, side * 0.8);
+        ColourBar.draw(g, bar, style.scale(), limits, map.unitLabel(), 1.0);
+        return bounds;
+    }
+
     /** The map, its colour bar and the electrodes; hover and click go to the state. */
     final class Canvas extends JComponent {
         Canvas() {
@@ -240,23 +257,12 @@ final class ScalpMapPanel extends JPanel {
                 if (current == null) {
                     return;
                 }
-                double barWidth = Math.max(56, Math.min(90, getWidth() * 0.18));
-                double side = Math.max(10, Math.min(getWidth() - barWidth - 12, getHeight() - 12));
-                double x = Math.max(6, (getWidth() - barWidth - side) / 2);
-                double y = Math.max(6, (getHeight() - side) / 2);
-                mapBounds = new Rectangle2D.Double(x, y, side, side);
                 MapStyle style = MapStyle.defaults().withScale(bench.state().colourScale())
                         .withHighlighted(bench.state().selectedChannels());
-                MapRenderer.draw(g, mapBounds, current, limits, style);
-                Rectangle2D bar = new Rectangle2D.Double(x + side + 8, y + side * 0.1, barWidth - 8, side * 0.8);
-                ColourBar.draw(g, bar, style.scale(), limits, unitLabel(), 1.0);
+                mapBounds = paintFrame(g, getWidth(), getHeight(), current, limits, style);
             } finally {
                 g.dispose();
             }
-        }
-
-        private String unitLabel() {
-            return current.unitLabel();
         }
 
         private Optional<String> electrodeAt(Point p) {

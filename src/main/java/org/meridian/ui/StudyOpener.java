@@ -9,6 +9,7 @@ import org.meridian.core.Study;
 import org.meridian.core.TimeAxis;
 import org.meridian.io.StudyLoader;
 import org.meridian.signal.ConditionExpression;
+import org.meridian.signal.TimeWindow;
 
 /**
  * Opens a study off the event thread: reads it (with progress and Cancel), fits the spline and
@@ -114,8 +115,9 @@ final class StudyOpener {
         end = o.windowEndMs().orElse(end);
         for (double t : new double[] {start, end}) {
             if (!axis.covers(t)) {
-                throw new BadInputException("option --window: " + t + " ms lies outside the data ("
-                        + axis.firstMs() + " to " + axis.lastMs() + " ms)");
+                throw new BadInputException("option --window: " + TimeWindow.format(t)
+                        + " ms lies outside the data (" + TimeWindow.format(axis.firstMs()) + " to "
+                        + TimeWindow.format(axis.lastMs()) + " ms)");
             }
         }
         double cursor = o.cursorMs().orElse((start + end) / 2);
