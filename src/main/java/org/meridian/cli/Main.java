@@ -21,6 +21,9 @@ import picocli.CommandLine.Option;
             InfoCommand.class,
             SimulateCommand.class,
             ViewCommand.class,
+            CsdCommand.class,
+            RepairCommand.class,
+            MapsCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;

@@ -15,7 +15,10 @@ import java.util.function.BooleanSupplier;
  * The byte-level tokenizer under every reader: it walks a stream line by line (LF or CRLF, a
  * UTF-8 byte-order mark skipped) and, once the delimiter is known, splits each line into cells
  * in the same pass, recording only where each cell starts and ends. Numbers are parsed straight
- * from those bytes with the fast double parser, so no String is made for a numeric cell.
+ * from those bytes with the fast double parser, so no String is made for a numeric cell. Rows
+ * made only of plain numbers take a faster road still, {@link #numberRow} ({@link NumberRows}),
+ * which finds and parses the cells in one pass; this class's cell methods read everything else
+ * and describe every problem.
  *
  * <p>Lines and columns are counted from 1; a column is a cell. Every problem is reported as a
  * {@link ReadException} naming the file, the line and the cell.
@@ -43,6 +46,7 @@ final class LineScanner implements Closeable {
     private int cells;
     private int[] starts = new int[64];
     private int[] ends = new int[64];
+    private final NumberRows rows = new NumberRows();
 
     /**
      * @param file      the file as the user knows it, for messages
@@ -193,6 +197,50 @@ final class LineScanner implements Closeable {
         starts[cells] = s;
         ends[cells] = e;
         cells++;
+    }
+
+    /**
+     * Reads the next line in one pass if it is a plain row of {@code 1 + count} cells: the first
+     * a number (stored in {@code first[firstAt]}) or, when {@code labelFirst}, a label (then
+     * available as {@link #text text(0)}), followed by {@code count} numbers stored as floats
+     * times {@code factor} in {@code dest[off + k · stride]}. Returns {@link NumberRows#ROW},
+     * {@link NumberRows#END}, or {@link NumberRows#SLOW} when the line must be read with
+     * {@link #next()} instead (it is then left unread).
+     */
+    int numberRow(boolean labelFirst, double[] first, int firstAt, float[] dest, int off,
+            int stride, int count, double factor) {
+        if ((line & CANCEL_CHECK_MASK) == 0 && cancelled.getAsBoolean()) {
+            throw new CancellationException("loading cancelled");
+        }
+        if (!started) {
+            start();
+        }
+        while (true) {
+            if (pos >= limit && eof) {
+                return NumberRows.END;
+            }
+            int nl = rows.row(buf, pos, limit, delimiter, labelFirst, first, firstAt, dest, off,
+                    stride, count, factor);
+            if (nl >= 0) {
+                if (labelFirst) {
+                    cells = 1;
+                    starts[0] = pos;
+                    ends[0] = rows.labelEnd();
+                }
+                lineStart = pos;
+                lineEnd = nl > pos && buf[nl - 1] == '\r' ? nl - 1 : nl;
+                pos = nl + 1;
+                line++;
+                return NumberRows.ROW;
+            }
+            if (nl != NumberRows.MORE) {
+                return nl;
+            }
+            if (eof) {
+                return NumberRows.SLOW;
+            }
+            refill();
+        }
     }
 
     int cellCount() {
@@ -353,7 +401,7 @@ final class LineScanner implements Closeable {
         }
         if (t.matches("[+-]?[0-9.]+([eE][+-]?[0-9]+)?")) {
             try {
-                if (Double.isInfinite(Double.parseDouble(t))) {
+                if (Math.abs(Double.parseDouble(t)) > Float.MAX_VALUE) {
                     return error(cell + 1, quote(t) + " is out of range");
                 }
             } catch (NumberFormatException ignored) {

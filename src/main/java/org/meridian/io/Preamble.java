@@ -44,6 +44,9 @@ record Preamble(int headerLine, List<String> columns, Unit.Scaled unit, int unit
                 }
                 continue;
             }
+            if (sc.count((byte) 0) > 0) {
+                throw sc.error(0, "this is not a text table (it holds binary data)");
+            }
             sc.splitAt(detectDelimiter(sc));
             sc.resplit();
             List<String> columns = new ArrayList<>(sc.cellCount());

@@ -158,7 +158,8 @@ public final class StudyLoader {
         for (int i = 0; i < rows.size(); i++) {
             ManifestReader.Row r = rows.get(i);
             cells.add(new Cell(r.participant(), r.condition(), loaded[i], r.trials(),
-                    r.file().toString()));
+                    r.file() + " (participant " + r.participant() + ", condition "
+                            + r.condition() + ")"));
         }
         return cells;
     }
@@ -273,8 +274,7 @@ public final class StudyLoader {
                         c.source()));
             } else {
                 throw new BadInputException(name + ": " + first.source() + " and " + c.source()
-                        + " have " + reference.describeLayoutDifference(w).replace("second",
-                        "the second"));
+                        + " have " + reference.describeLayoutDifference(w));
             }
         }
         Montage fromFile = montageFile == null ? null : MontageReader.read(montageFile);

@@ -62,8 +62,9 @@ final class TextInput {
     /** A read failure in the middle of a file (a truncated gzip stream, a vanished disk). */
     static BadInputException failure(String file, int line, IOException e) {
         String what = e instanceof java.util.zip.ZipException || e instanceof java.io.EOFException
-                ? "the compressed data is damaged or cut short" : e.getMessage();
-        return new ReadException(file, line, 0, "cannot read on: " + what);
+                ? "the compressed data is damaged or cut short"
+                : "the file cannot be read further: " + e.getMessage();
+        return new ReadException(file, line, 0, what);
     }
 
     private static void closeQuietly(InputStream in) {

@@ -25,6 +25,8 @@ import org.meridian.core.Waveforms;
  */
 public final class WaveformReader {
     private static final int INITIAL_ROWS = 1024;
+    /** Rows parsed into one block (with 128 channels 32 KB, which stays in cache). */
+    private static final int BLOCK_ROWS = 64;
 
     private WaveformReader() {
     }
@@ -50,7 +52,12 @@ public final class WaveformReader {
         }
     }
 
-    /** Samples as rows: values arrive sample-major and are transposed at the end. */
+    /**
+     * Samples as rows. Values arrive sample-major; they are parsed straight into blocks of
+     * {@value #BLOCK_ROWS} rows held channel-major (small enough to stay in cache while they
+     * fill), and at the end each block's channel runs are copied into the one array of the exact
+     * size.
+     */
     private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs) {
         List<String> labels = labels(sc, pre.columns().subList(1, pre.columns().size()), 2);
         int channels = labels.size();
@@ -58,40 +65,58 @@ public final class WaveformReader {
         double factor = pre.unit().factor();
         double[] times = new double[INITIAL_ROWS];
         int[] lines = new int[INITIAL_ROWS];
-        float[] bySample = new float[INITIAL_ROWS * channels];
+        List<float[]> blocks = new ArrayList<>();
+        float[] block = new float[BLOCK_ROWS * channels];
         int n = 0;
-        while (sc.next()) {
-            if (sc.cellCount() != width) {
-                if (sc.cellCount() == 1 && sc.isBlank()) {
-                    continue;
-                }
-                throw ragged(sc, width);
-            }
+        while (true) {
             if (n == times.length) {
-                int cap = n * 2;
-                times = Arrays.copyOf(times, cap);
-                lines = Arrays.copyOf(lines, cap);
-                bySample = Arrays.copyOf(bySample, cap * channels);
+                times = Arrays.copyOf(times, n * 2);
+                lines = Arrays.copyOf(lines, n * 2);
             }
-            times[n] = sc.number(0) * toMs;
+            int row = n % BLOCK_ROWS;
+            int r = sc.numberRow(false, times, n, block, row, BLOCK_ROWS, channels, factor);
+            if (r == NumberRows.END) {
+                break;
+            }
+            if (r == NumberRows.SLOW) {
+                if (!sc.next()) {
+                    break;
+                }
+                if (sc.cellCount() != width) {
+                    if (sc.cellCount() == 1 && sc.isBlank()) {
+                        continue;
+                    }
+                    throw ragged(sc, width);
+                }
+                times[n] = sc.number(0);
+                for (int c = 0; c < channels; c++) {
+                    block[c * BLOCK_ROWS + row] = sc.value(c + 1, factor);
+                }
+            }
+            times[n] *= toMs;
             lines[n] = sc.line();
-            int base = n * channels;
-            for (int c = 0; c < channels; c++) {
-                bySample[base + c] = sc.value(c + 1, factor);
-            }
             n++;
+            if (n % BLOCK_ROWS == 0) {
+                blocks.add(block);
+                block = new float[BLOCK_ROWS * channels];
+            }
         }
         if (n == 0) {
             throw new ReadException(sc.file(), pre.headerLine(), 0, "a header but no data rows");
         }
+        if (n % BLOCK_ROWS != 0) {
+            blocks.add(block);
+        }
         final int[] rowLines = lines;
         TimeAxis axis = Sampling.axis(times, n, (i, problem) ->
                 new ReadException(sc.file(), rowLines[i], 1, problem));
-        float[] byChannel = new float[channels * n];
-        for (int s = 0; s < n; s++) {
-            int base = s * channels;
+        float[] byChannel = new float[Math.multiplyExact(channels, n)];
+        for (int k = 0; k < blocks.size(); k++) {
+            float[] rows = blocks.get(k);
+            int first = k * BLOCK_ROWS;
+            int count = Math.min(BLOCK_ROWS, n - first);
             for (int c = 0; c < channels; c++) {
-                byChannel[c * n + s] = bySample[base + c];
+                System.arraycopy(rows, c * BLOCK_ROWS, byChannel, c * n + first, count);
             }
         }
         return Waveforms.wrap(labels, axis, pre.unit().unit(), byChannel);
@@ -112,12 +137,29 @@ public final class WaveformReader {
         List<String> labels = new ArrayList<>();
         Map<String, Integer> seenOnLine = new HashMap<>();
         float[] byChannel = new float[16 * samples];
-        while (sc.next()) {
-            if (sc.cellCount() != width) {
-                if (sc.cellCount() == 1 && sc.isBlank()) {
-                    continue;
+        while (true) {
+            int c = labels.size();
+            if ((c + 1) * samples > byChannel.length) {
+                byChannel = Arrays.copyOf(byChannel, byChannel.length * 2);
+            }
+            int base = c * samples;
+            int r = sc.numberRow(true, null, 0, byChannel, base, 1, samples, factor);
+            if (r == NumberRows.END) {
+                break;
+            }
+            if (r == NumberRows.SLOW) {
+                if (!sc.next()) {
+                    break;
                 }
-                throw ragged(sc, width);
+                if (sc.cellCount() != width) {
+                    if (sc.cellCount() == 1 && sc.isBlank()) {
+                        continue;
+                    }
+                    throw ragged(sc, width);
+                }
+                for (int s = 0; s < samples; s++) {
+                    byChannel[base + s] = sc.value(s + 1, factor);
+                }
             }
             String label = sc.text(0);
             if (label.isEmpty()) {
@@ -127,14 +169,6 @@ public final class WaveformReader {
             if (previous != null) {
                 throw sc.error(1, "channel " + label + " appears twice (also on line " + previous
                         + ")");
-            }
-            int c = labels.size();
-            if ((c + 1) * samples > byChannel.length) {
-                byChannel = Arrays.copyOf(byChannel, byChannel.length * 2);
-            }
-            int base = c * samples;
-            for (int s = 0; s < samples; s++) {
-                byChannel[base + s] = sc.value(s + 1, factor);
             }
             labels.add(label);
         }

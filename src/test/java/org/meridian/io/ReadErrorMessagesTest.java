@@ -205,9 +205,9 @@ class ReadErrorMessagesTest {
         file("p01.tsv", "time_ms\tCz\tPz\n0\t1\t1\n4\t2\t2\n");
         file("p02.tsv", "time_ms\tCz\tOz\n0\t1\t1\n4\t2\t2\n");
         file("study.tsv", "participant\tcondition\tfile\np01\trare\tp01.tsv\np02\trare\tp02.tsv\n");
-        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " and "
-                + dir.resolve("p02.tsv") + " have different channels: the second lacks Pz; the"
-                + " second adds Oz");
+        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " (participant p01,"
+                + " condition rare) and " + dir.resolve("p02.tsv") + " (participant p02, condition"
+                + " rare) have different channels: second lacks Pz; second adds Oz");
     }
 
     @Test
@@ -215,8 +215,9 @@ class ReadErrorMessagesTest {
         file("p01.tsv", "time_ms\tCz\n0\t1\n4\t2\n");
         file("p02.tsv", "time_ms\tCz\n0\t1\n2\t2\n");
         file("study.tsv", "participant\tcondition\tfile\np01\trare\tp01.tsv\np01\tcommon\tp02.tsv\n");
-        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " and "
-                + dir.resolve("p02.tsv") + " have different time axes: 250 Hz vs 500 Hz");
+        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " (participant p01,"
+                + " condition rare) and " + dir.resolve("p02.tsv") + " (participant p01, condition"
+                + " common) have different time axes: 250 Hz vs 500 Hz");
     }
 
     @Test
@@ -224,8 +225,9 @@ class ReadErrorMessagesTest {
         file("p01.tsv", "time_ms\tCz\n0\t1\n4\t2\n");
         file("p02.tsv", "# unit: uV/m2\ntime_ms\tCz\n0\t1\n4\t2\n");
         file("study.tsv", "participant\tcondition\tfile\np01\trare\tp01.tsv\np02\trare\tp02.tsv\n");
-        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " and "
-                + dir.resolve("p02.tsv") + " have different units: µV vs µV/m²");
+        assertThat(error(dir)).isEqualTo(dir + ": " + dir.resolve("p01.tsv") + " (participant p01,"
+                + " condition rare) and " + dir.resolve("p02.tsv") + " (participant p02, condition"
+                + " rare) have different units: µV vs µV/m²");
     }
 
     @Test
@@ -298,5 +300,24 @@ class ReadErrorMessagesTest {
                 + "p01\trare\tPz\t8\t1\np01\trare\tCz\t8\t1\n");
         assertThat(error(f)).isEqualTo(f + ": no value for participant p01, condition rare,"
                 + " channel Pz at 4 ms");
+    }
+
+    @Test
+    void binaryFileIsNotATable() throws IOException {
+        Path f = dir.resolve("image.tsv");
+        Files.write(f, new byte[] {(byte) 0x89, 'P', 'N', 'G', 0, 0, 0, '\n', 1, 2});
+        assertThat(error(f)).isEqualTo(f + " line 1: this is not a text table (it holds binary"
+                + " data)");
+    }
+
+    @Test
+    void truncatedCompressedFileIsNamed() throws IOException {
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        try (java.util.zip.GZIPOutputStream gz = new java.util.zip.GZIPOutputStream(bytes)) {
+            gz.write("time_ms\tCz\n0\t1\n4\t2\n8\t3\n".getBytes(StandardCharsets.UTF_8));
+        }
+        Path f = dir.resolve("cut.tsv.gz");
+        Files.write(f, java.util.Arrays.copyOf(bytes.toByteArray(), 25));
+        assertThat(error(f)).endsWith(": the compressed data is damaged or cut short");
     }
 }

@@ -20,9 +20,9 @@ import org.meridian.io.VariantWriter.UnitText;
 import org.meridian.io.VariantWriter.Variant;
 
 /** Any study written in any format variant of DESIGN §4 reads back equal. */
-class FormatRoundTripProperties {
+class FormatRoundTripPropertyTest {
 
-    @Property(tries = 120)
+    @Property(tries = 200)
     void everyFormatVariantReadsBackEqual(@ForAll("variants") Variant v,
             @ForAll("seeds") long seed) throws Exception {
         Random r = new Random(seed);

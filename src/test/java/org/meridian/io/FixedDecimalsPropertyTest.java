@@ -9,7 +9,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 
-class FixedDecimalsProperties {
+class FixedDecimalsPropertyTest {
 
     @Property(tries = 800)
     void agreesWithBigDecimalHalfUp(@ForAll float v, @ForAll @IntRange(min = 0, max = 12) int d) {

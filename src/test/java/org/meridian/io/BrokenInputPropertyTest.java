@@ -30,7 +30,7 @@ import org.meridian.io.VariantWriter.Variant;
  * Every broken variant of a valid file fails with a one-line {@link BadInputException} that
  * names the file, line and cell at fault, and never with any other exception.
  */
-class BrokenInputProperties {
+class BrokenInputPropertyTest {
 
     enum FileBreak {
         DUPLICATE_LABEL, NON_NUMERIC, DECIMAL_COMMA, NAN, INFINITE, RAGGED_SHORT, RAGGED_LONG,
@@ -39,7 +39,7 @@ class BrokenInputProperties {
 
     enum StudyBreak { MISSING_FILE, DIFFERENT_CHANNELS, DIFFERENT_AXIS, SAME_POSITION }
 
-    @Property(tries = 150)
+    @Property(tries = 200)
     void everyBrokenWaveformFileNamesItsFault(@ForAll("singleFiles") Variant v,
             @ForAll FileBreak kind, @ForAll("seeds") long seed) throws Exception {
         Random r = new Random(seed);
@@ -191,7 +191,9 @@ class BrokenInputProperties {
                     labels.set(0, "Extra");
                     Waveforms other = Waveforms.wrap(labels, w.axis(), w.unit(), w.copyValues());
                     VariantWriter.writeLines(second, VariantWriter.waveformLines(other, v), v);
-                    expect.add(arg + ": " + first + " and " + second + " have different channels:");
+                    expect.add(arg + ": " + first + " (participant ");
+                    expect.add(" and " + second + " (participant ");
+                    expect.add(") have different channels:");
                     expect.add("lacks " + w.label(0));
                 }
                 case DIFFERENT_AXIS -> {
@@ -201,8 +203,9 @@ class BrokenInputProperties {
                             a.firstMs() + a.stepMs(), a.rateHz(), a.samples()), w.unit(),
                             w.copyValues());
                     VariantWriter.writeLines(second, VariantWriter.waveformLines(other, v), v);
-                    expect.add(arg + ": " + first + " and " + second + " have different time axes:"
-                            + " first sample");
+                    expect.add(arg + ": " + first + " (participant ");
+                    expect.add(" and " + second + " (participant ");
+                    expect.add(") have different time axes: first sample");
                 }
                 case SAME_POSITION -> {
                     Path montage = dir.resolve("montage.tsv");

@@ -1,0 +1,60 @@
+package org.meridian.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.meridian.core.Study;
+import org.meridian.io.StudyLoader;
+import org.meridian.io.StudyWriter;
+import org.meridian.spline.SplineParameters;
+import org.meridian.spline.SurfaceLaplacian;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code csd STUDY -o DIR}: the CSD (surface Laplacian) of every waveform as a new study. */
+@Command(name = "csd", mixinStandardHelpOptions = true,
+        description = {"Write the current source density CSD = -(surface Laplacian) of every waveform, "
+                + "in uV/m2, as a new study folder (spherical splines, Perrin et al. 1989).",
+            "Channels without a position (e.g. EOG) are left out of the output."})
+final class CsdCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "STUDY", description = "A manifest, its folder, a waveform file or a long table.")
+    Path study;
+
+    @Option(names = {"-o", "--output"}, required = true, paramLabel = "DIR", description = "The new study folder.")
+    Path output;
+
+    @Option(names = "--force", description = "Replace the output folder if it exists and is not empty.")
+    boolean force;
+
+    @Option(names = "--decimals", paramLabel = "N", defaultValue = "4",
+            description = "Digits after the decimal point of every written value (default ${DEFAULT-VALUE}).")
+    int decimals;
+
+    @Mixin
+    SplineOptions spline;
+
+    @Override
+    public Integer call() {
+        SplineParameters parameters = spline.parameters();
+        Study in = StudyLoader.load(study);
+        Study csd = SurfaceLaplacian.of(in, parameters);
+        StudyWriter.write(csd, output, new StudyWriter.Options(false, decimals, force));
+        PrintWriter out = spec.commandLine().getOut();
+        out.println("output: " + output);
+        out.println("waveforms: " + in.participants().size() * in.conditions().size());
+        out.println("channels: " + csd.channelLabels().size());
+        out.println("unit: " + csd.unit().symbol());
+        out.println("spline: " + parameters.describe());
+        if (!in.unpositionedChannels().isEmpty()) {
+            out.println("left_out: " + String.join(", ", in.unpositionedChannels()) + " (no position)");
+        }
+        return Main.EXIT_OK;
+    }
+}

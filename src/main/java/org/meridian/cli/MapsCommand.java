@@ -1,0 +1,178 @@
+package org.meridian.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.meridian.core.BadInputException;
+import org.meridian.core.Study;
+import org.meridian.core.Waveforms;
+import org.meridian.io.StudyLoader;
+import org.meridian.maps.ColourLimits;
+import org.meridian.maps.ColourScales;
+import org.meridian.maps.FigureFormat;
+import org.meridian.maps.MapExtent;
+import org.meridian.maps.MapMaker;
+import org.meridian.maps.MapMoment;
+import org.meridian.maps.MapStrip;
+import org.meridian.maps.MapStyle;
+import org.meridian.maps.ScalpMap;
+import org.meridian.signal.GrandAverage;
+import org.meridian.spline.Quantity;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code maps STUDY --condition EXPR (--times T,… | --windows A:B,…) -o FILE}: a strip of scalp
+ * maps of a condition's grand average with one shared colour bar, as SVG, PDF or PNG.
+ */
+@Command(name = "maps", mixinStandardHelpOptions = true,
+        description = "Draw a strip of scalp maps (spherical-spline potential, or CSD with --csd) of a "
+                + "condition's grand average at given times or as window means, with one colour bar.")
+final class MapsCommand implements Callable<Integer> {
+    private static final double MM_PER_POINT = 25.4 / 72;
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "STUDY", description = "A manifest, its folder, a waveform file or a long table.")
+    Path study;
+
+    @Option(names = "--condition", required = true, paramLabel = "EXPR", description = "The condition to map.")
+    String condition;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Moments moments;
+
+    static final class Moments {
+        @Option(names = "--times", split = ",", paramLabel = "T", description = "Times in ms, e.g. 100,200,300.")
+        List<String> times;
+
+        @Option(names = "--windows", split = ",", paramLabel = "A:B",
+                description = "Windows in ms, each map the mean over the window, e.g. 300:400,400:500.")
+        List<String> windows;
+    }
+
+    @Option(names = "--csd", description = "Map the CSD (uV/m2) instead of the potential.")
+    boolean csd;
+
+    @Option(names = "--scale", paramLabel = "auto|±X", defaultValue = "auto",
+            description = "Colour limits: auto (symmetric, rounded, shared by all maps) or ±X.")
+    String scale;
+
+    @Option(names = "--colour-scale", paramLabel = "NAME", defaultValue = "diverging",
+            description = "diverging (default) or blue-yellow (colour-blind safe).")
+    String colourScale;
+
+    @Option(names = "--extent", paramLabel = "head|electrodes[:MARGIN]", defaultValue = "electrodes",
+            description = "Colour up to the head outline, or up to the outermost electrodes plus a margin "
+                    + "(default; the margin in plane units, 1 = 90 degrees).")
+    String extent;
+
+    @Option(names = "--labels", description = "Label every electrode.")
+    boolean labels;
+
+    @Option(names = "--highlight", split = ",", paramLabel = "LABEL", description = "Electrodes to highlight.")
+    List<String> highlight = new ArrayList<>();
+
+    @Option(names = "--no-contours", description = "Leave out the contour lines.")
+    boolean noContours;
+
+    @Option(names = "--width-mm", paramLabel = "MM",
+            description = "Figure width in mm (default 85 for one or two maps, else 175).")
+    Double widthMm;
+
+    @Option(names = "--dpi", paramLabel = "DPI", defaultValue = "300", description = "PNG resolution (default ${DEFAULT-VALUE}).")
+    int dpi;
+
+    @Option(names = "--resolution", paramLabel = "PIXELS", defaultValue = "256",
+            description = "Map grid pixels across each map (default ${DEFAULT-VALUE}).")
+    int resolution;
+
+    @Option(names = {"-o", "--output"}, required = true, paramLabel = "FILE", description = "FILE.svg, FILE.pdf or FILE.png.")
+    Path output;
+
+    @Mixin
+    SplineOptions spline;
+
+    @Override
+    public Integer call() {
+        FigureFormat format = FigureFormat.of(output);
+        if (resolution < 16 || resolution > 2048) {
+            throw new BadInputException("option --resolution: must be from 16 to 2048, got " + resolution);
+        }
+        List<MapMoment> when = parseMoments();
+        ColourLimits limits = ColourLimits.parse(scale);
+        MapStyle style = MapStyle.defaults().withScale(ColourScales.byName(colourScale)).withLabels(labels)
+                .withHighlighted(highlight).withContours(!noContours);
+        MapExtent mapExtent = MapExtent.parse(extent);
+
+        Study in = StudyLoader.load(study);
+        Waveforms average = grandAverage(in, condition);
+        MapMaker maker = MapMaker.of(in.montage(), spline.parameters(), csd ? Quantity.CSD : Quantity.POTENTIAL,
+                mapExtent, resolution);
+        List<ScalpMap> maps = maker.maps(average, when);
+        MapStrip strip = limits == null ? MapStrip.withAutomaticLimits(maps, style) : new MapStrip(maps, limits, style);
+        double width = widthMm != null ? widthMm : (maps.size() <= 2 ? 85 : 175);
+        format.write(strip, output, width / MM_PER_POINT, dpi);
+
+        PrintWriter out = spec.commandLine().getOut();
+        out.println("output: " + output);
+        out.println("maps: " + maps.size());
+        out.println("condition: " + condition);
+        out.println("quantity: " + maps.get(0).unitLabel());
+        out.println("limits: " + strip.limits().format(strip.limits().lower()) + " to "
+                + strip.limits().format(strip.limits().upper()));
+        out.println("channels: " + in.montage().size());
+        if (!in.unpositionedChannels().isEmpty()) {
+            out.println("left_out: " + String.join(", ", in.unpositionedChannels()) + " (no position)");
+        }
+        return Main.EXIT_OK;
+    }
+
+    /**
+     * The grand average of the condition to map. Until contrast expressions exist in the signal
+     * package, EXPR is the name of one loaded condition; this is the one place to change when
+     * they do.
+     */
+    static Waveforms grandAverage(Study study, String expression) {
+        int c = study.conditionIndex(expression.trim());
+        if (c < 0) {
+            throw new BadInputException("option --condition: " + study.name() + " has no condition \""
+                    + expression + "\" (conditions: " + String.join(", ", study.conditions()) + ")");
+        }
+        return GrandAverage.of(study, c);
+    }
+
+    private List<MapMoment> parseMoments() {
+        List<MapMoment> out = new ArrayList<>();
+        if (moments.times != null) {
+            for (String t : moments.times) {
+                out.add(MapMoment.at(number(t, "--times")));
+            }
+        } else {
+            for (String w : moments.windows) {
+                String[] ends = w.split(":", -1);
+                if (ends.length != 2) {
+                    throw new BadInputException("option --windows: \"" + w + "\" is not START:END in ms");
+                }
+                out.add(MapMoment.window(number(ends[0], "--windows"), number(ends[1], "--windows")));
+            }
+        }
+        return out;
+    }
+
+    private static double number(String text, String option) {
+        try {
+            return Double.parseDouble(text.trim());
+        } catch (NumberFormatException e) {
+            throw new BadInputException("option " + option + ": \"" + text + "\" is not a number of ms");
+        }
+    }
+}
