@@ -1,6 +1,7 @@
 package org.meridian.ui;
 
 import java.awt.Graphics2D;
+import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.util.ArrayList;
 import java.util.List;
@@ -11,8 +12,6 @@ import org.meridian.core.Study;
 import org.meridian.core.TimeAxis;
 import org.meridian.core.Unit;
 import org.meridian.core.Waveforms;
-import org.meridian.maps.ColourLimits;
-import org.meridian.maps.MapMaker;
 import org.meridian.maps.MapMoment;
 import org.meridian.maps.MapStyle;
 import org.meridian.maps.ScalpMap;
@@ -30,11 +29,13 @@ import org.openjdk.jmh.annotations.State;
 
 /**
  * The scalp map's repaint path while scrubbing: one operation is one step of the time cursor
- * across 500 samples of a 128-channel grand average — the map at the new sample (the same calls
- * as {@code ScalpMapPanel}: the moment's values, one product with the live grid's weights) and
- * the whole frame painted offscreen by {@link ScalpMapPanel#paintFrame} (map, contours, head,
- * electrodes, colour bar) into a panel of 440 × 360 pixels, at scale 1 and at scale 2 (a HiDPI
- * screen). Frames per second = 1000 / (ms per operation); the target is ≥ 60.
+ * across 500 samples of a 128-channel grand average, painted offscreen exactly as
+ * {@code ScalpMapPanel} paints a frame — the moment's values, then {@link LiveMap#paint}: the
+ * raster of the map's square in device pixels (coarse grid of {@value StudySession#COARSE_NODES}
+ * nodes upsampled), the contour lines, head, electrodes and the colour bar — into a panel of
+ * 440 × 360 pixels at scale 1 and at scale 2 (a HiDPI screen: four times the pixels). Without
+ * contour lines is the frame drawn while scrubbing; with them, the frame once the cursor rests.
+ * Frames per second = 1000 / (ms per operation); the target is ≥ 60.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -51,11 +52,16 @@ public class MapFrameBench {
     @Param({"POTENTIAL", "CSD"})
     public Quantity quantity;
 
-    private MapMaker maker;
-    private Waveforms grand;
+    /** Contour lines: left out while the cursor moves fast, drawn when it rests. */
+    @Param({"false", "true"})
+    public boolean contours;
+
+    private LiveMap live;
+    private Rectangle2D bounds;
     private int[] rows;
+    private Waveforms grand;
     private MapStyle style;
-    private ColourLimits limits;
+    private double halfRange;
     private BufferedImage screen;
     private Graphics2D g;
     private int sample;
@@ -66,10 +72,11 @@ public class MapFrameBench {
         grand = smoothWaves(montage);
         Study study = Study.builder("bench").montage(montage).add("p01", "c", grand).build();
         StudySession session = StudySession.of(study, null, "bench");
-        maker = session.maker(quantity, StudySession.LIVE_RESOLUTION);
-        rows = maker.spline().rowsIn(grand);
+        bounds = LiveMap.mapBounds(WIDTH, HEIGHT, scale);
+        live = new LiveMap(session.raster(quantity, (int) Math.round(bounds.getWidth() * scale)));
+        rows = session.spline().rowsIn(grand);
         style = MapStyle.defaults().withHighlighted(List.of("Pz"));
-        limits = ColourLimits.automatic(quantity == Quantity.CSD ? 400 : 8);
+        halfRange = quantity == Quantity.CSD ? 400 : 8;
         screen = new BufferedImage(WIDTH * scale, HEIGHT * scale, BufferedImage.TYPE_INT_RGB);
         g = screen.createGraphics();
         g.scale(scale, scale);
@@ -79,11 +86,10 @@ public class MapFrameBench {
     public ScalpMap cursorStep() {
         sample = (sample + 1) % SAMPLES;
         MapMoment m = MapMoment.at(grand.axis().timeMs(sample));
-        ScalpMap map = maker.map(m.valuesOf(grand, rows), grand.unit(), m.label());
+        double[] values = m.valuesOf(grand, rows);
         g.setColor(java.awt.Color.WHITE);
         g.fillRect(0, 0, WIDTH, HEIGHT);
-        ScalpMapPanel.paintFrame(g, WIDTH, HEIGHT, map, limits, style);
-        return map;
+        return live.paint(g, bounds, values, grand.unit(), coarse -> halfRange, style, contours).coarse();
     }
 
     /** 128 positions of the 10-5 system spread over the head (every k-th above the lower ring). */

@@ -20,11 +20,13 @@ import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
+import org.meridian.core.Waveforms;
 import org.meridian.maps.ColourBar;
 import org.meridian.maps.ColourLimits;
 import org.meridian.maps.MapGrid;
 import org.meridian.maps.MapMaker;
 import org.meridian.maps.MapMoment;
+import org.meridian.maps.MapRaster;
 import org.meridian.maps.MapRenderer;
 import org.meridian.maps.MapStyle;
 import org.meridian.maps.ScalpMap;
@@ -48,6 +50,14 @@ final class ScalpMapPanel extends JPanel {
     private boolean updating;
     private ScalpMap current;
     private ColourLimits limits;
+    private LiveMap live;
+    private String pendingRaster;
+    private String currentTitle = "";
+    /** True while the cursor moves faster than {@value #SETTLE_MS} ms a step: frames skip contours. */
+    private boolean scrubbing;
+    private long lastCursorNanos;
+    private final javax.swing.Timer settle;
+    static final int SETTLE_MS = 150;
     private Rectangle2D mapBounds = new Rectangle2D.Double();
 
     ScalpMapPanel(Workbench bench) {
@@ -86,12 +96,22 @@ final class ScalpMapPanel extends JPanel {
         canvas.setName("map.canvas");
         add(canvas, BorderLayout.CENTER);
 
+        settle = new javax.swing.Timer(SETTLE_MS, e -> {
+            scrubbing = false;
+            canvas.repaint();
+        });
+        settle.setRepeats(false);
         bench.state().addListener((s, what) -> {
+            if (what.contains(ViewState.Aspect.CURSOR)) {
+                long now = System.nanoTime();
+                scrubbing = now - lastCursorNanos < SETTLE_MS * 1_000_000L;
+                lastCursorNanos = now;
+                settle.restart();
+            }
             if (what.contains(ViewState.Aspect.WAVES) || what.contains(ViewState.Aspect.MAP_WAVE)
                     || what.contains(ViewState.Aspect.MOMENT)) {
                 refreshControls();
             }
-            current = null;
             updateLabel();
             canvas.repaint();
         });
@@ -99,7 +119,6 @@ final class ScalpMapPanel extends JPanel {
             if (what.contains(ViewModel.Change.CATALOGUE) || what.contains(ViewModel.Change.SESSION)) {
                 refreshControls();
             }
-            current = null;
             updateLabel();
             canvas.repaint();
         });
@@ -161,44 +180,54 @@ final class ScalpMapPanel extends JPanel {
         timeLabel.setText(s.mapWave() + "  ·  " + s.quantity().word() + "  ·  " + when);
     }
 
-    /** Computes the map of the current state (about a millisecond), or null when there is none. */
-    private ScalpMap computeMap() {
-        StudySession session = bench.model().session();
-        ViewState s = bench.state();
-        Averages.WaveAverage w = bench.model().averages().wave(s.mapWave());
-        if (session == null || !session.hasMaps() || w == null) {
-            return null;
-        }
-        MapQuantity q = s.quantity() == MapQuantity.CSD && !session.hasCsd() ? MapQuantity.POTENTIAL : s.quantity();
-        MapMaker maker = session.maker(q.quantity(), StudySession.LIVE_RESOLUTION);
-        MapMoment m = s.moment() == MapMomentMode.CURSOR ? MapMoment.at(s.cursorMs())
-                : MapMoment.window(s.windowStartMs(), s.windowEndMs());
-        int[] rows = maker.spline().rowsIn(w.grand());
-        ScalpMap map = maker.map(m.valuesOf(w.grand(), rows), w.grand().unit(), m.label());
-        limits = switch (s.colourRange().mode()) {
-            case AUTO -> ColourLimits.automatic(w.maxAbs(q));
-            case SYMMETRIC -> ColourLimits.automatic(map.maxAbs());
-            case LOCKED -> ColourLimits.symmetric(s.colourRange().limit());
-        };
-        return map;
+    /** The wave the map shows now, or null. */
+    private Averages.WaveAverage mapWave() {
+        return bench.model().averages().wave(bench.state().mapWave());
     }
 
-    /**
-     * Draws one frame of the live map into a panel of the given size: the map in the largest
-     * square that leaves room for the colour bar on its right. Returns the map's bounds. The
-     * repaint path of the panel, and what {@code MapFrameBench} times.
-     */
-    static Rectangle2D paintFrame(Graphics2D g, double width, double height, ScalpMap map,
-            ColourLimits limits, MapStyle style) {
-        double barWidth = Math.max(56, Math.min(90, width * 0.18));
-        double side = Math.max(10, Math.min(width - barWidth - 12, height - 12));
-        double x = Math.max(6, (width - barWidth - side) / 2);
-        double y = Math.max(6, (height - side) / 2);
-        Rectangle2D bounds = new Rectangle2D.Double(x, y, side, side);
+    /** The quantity the map can show now (the potential when the study has no CSD). */
+    private MapQuantity quantity(StudySession session) {
+        MapQuantity q = bench.state().quantity();
+        return q == MapQuantity.CSD && !session.hasCsd() ? MapQuantity.POTENTIAL : q;
+    }
+
+    private MapMoment moment() {
+        ViewState s = bench.state();
+        return s.moment() == MapMomentMode.CURSOR ? MapMoment.at(s.cursorMs())
+                : MapMoment.window(s.windowStartMs(), s.windowEndMs());
+    }
+
+    /** The colour limits' half-range for a frame, by the state's colour range. */
+    private double halfRange(Averages.WaveAverage w, MapQuantity q, ScalpMap frame) {
+        ColourRange r = bench.state().colourRange();
+        return switch (r.mode()) {
+            case AUTO -> w.maxAbs(q);
+            case SYMMETRIC -> frame.maxAbs();
+            case LOCKED -> r.limit();
+        };
+    }
+
+    /** Builds the raster of a display size in the background, once; the canvas repaints when done. */
+    private void requestRaster(StudySession session, MapQuantity q, int pixels) {
+        String key = q + "@" + pixels;
+        if (key.equals(pendingRaster)) {
+            return;
+        }
+        pendingRaster = key;
+        bench.tasks().submit("map.raster", "Preparing the scalp map",
+                p -> session.raster(q.quantity(), pixels), r -> {
+                    pendingRaster = null;
+                    canvas.repaint();
+                }, t -> {
+                    pendingRaster = null;
+                    bench.report(t);
+                });
+    }
+
+    /** Draws a full map (not the raster path) with its colour bar beside it, laid out as a live frame. */
+    static void paintFrame(Graphics2D g, Rectangle2D bounds, ScalpMap map, ColourLimits limits, MapStyle style) {
         MapRenderer.draw(g, bounds, map, limits, style);
-        Rectangle2D bar = new Rectangle2D.Double(x + side + 8, y + side * 0.1, barWidth - 8, side * 0.8);
-        ColourBar.draw(g, bar, style.scale(), limits, map.unitLabel(), 1.0);
-        return bounds;
+        ColourBar.draw(g, LiveMap.barBounds(bounds), style.scale(), limits, map.unitLabel(), 1.0);
     }
 
     /** The map, its colour bar and the electrodes; hover and click go to the state. */
@@ -251,18 +280,47 @@ final class ScalpMapPanel extends JPanel {
                     g.drawString("No scalp map: " + session.whyNoMaps(), 8, 20);
                     return;
                 }
-                if (current == null) {
-                    current = computeMap();
-                }
-                if (current == null) {
+                Averages.WaveAverage w = mapWave();
+                if (session == null || w == null) {
+                    current = null;
                     return;
                 }
-                MapStyle style = MapStyle.defaults().withScale(bench.state().colourScale())
-                        .withHighlighted(bench.state().selectedChannels());
-                mapBounds = paintFrame(g, getWidth(), getHeight(), current, limits, style);
+                paintMap(g, session, w);
             } finally {
                 g.dispose();
             }
+        }
+
+        /**
+         * One frame: through the raster of this panel's size in device pixels when it is built,
+         * else (for the moments until it is) the full map of the precomputed live grid.
+         */
+        private void paintMap(Graphics2D g, StudySession session, Averages.WaveAverage w) {
+            MapQuantity q = quantity(session);
+            double scale = g.getTransform().getScaleX();
+            mapBounds = LiveMap.mapBounds(getWidth(), getHeight(), scale);
+            int pixels = (int) Math.round(mapBounds.getWidth() * scale);
+            MapStyle style = MapStyle.defaults().withScale(bench.state().colourScale())
+                    .withHighlighted(bench.state().selectedChannels());
+            MapMoment m = moment();
+            currentTitle = m.label();
+            double[] values = m.valuesOf(w.grand(), session.spline().rowsIn(w.grand()));
+            MapRaster raster = session.rasterIfBuilt(q.quantity(), pixels);
+            if (raster != null) {
+                if (live == null || live.raster() != raster) {
+                    live = new LiveMap(raster);
+                }
+                LiveMap.Frame f = live.paint(g, mapBounds, values, w.grand().unit(),
+                        coarse -> halfRange(w, q, coarse), style, !scrubbing);
+                current = f.coarse();
+                limits = f.limits();
+                return;
+            }
+            requestRaster(session, q, pixels);
+            MapMaker maker = session.maker(q.quantity(), StudySession.LIVE_RESOLUTION);
+            current = maker.map(values, w.grand().unit(), m.label());
+            limits = ColourLimits.automatic(halfRange(w, q, current));
+            paintFrame(g, mapBounds, current, limits, style);
         }
 
         private Optional<String> electrodeAt(Point p) {
@@ -274,9 +332,22 @@ final class ScalpMapPanel extends JPanel {
             return MapRenderer.electrodeAt(mapBounds, s.layout(), p, tolerance);
         }
 
+        /** Names the electrode under the mouse with its value, or the map's value between electrodes. */
         private void hover(Point p) {
             if (current == null || mapBounds.isEmpty()) {
                 return;
+            }
+            String unit = current.unitLabel().startsWith("CSD") ? "µV/m²" : current.unitLabel();
+            Optional<String> electrode = electrodeAt(p);
+            Averages.WaveAverage w = mapWave();
+            if (electrode.isPresent() && w != null) {
+                Waveforms field = w.field(quantity(bench.model().session()));
+                int row = field.indexOf(electrode.get());
+                if (row >= 0) {
+                    double v = moment().valuesOf(field, new int[] {row})[0];
+                    bench.pointer(currentTitle, electrode.get(), Texts.value(v, unit));
+                    return;
+                }
             }
             AffineTransform t = MapRenderer.planeToDevice(mapBounds, current.layout());
             Point2D plane;
@@ -288,15 +359,12 @@ final class ScalpMapPanel extends JPanel {
             MapGrid grid = current.grid();
             int col = (int) Math.round(grid.column(plane.getX()));
             int row = (int) Math.round(grid.row(plane.getY()));
-            String time = current.title();
-            String channel = electrodeAt(p).orElse("");
             if (col < 0 || row < 0 || col >= grid.size() || row >= grid.size()
                     || Float.isNaN(current.value(col, row))) {
-                bench.pointer(time, channel, "");
+                bench.pointer(currentTitle, "", "");
                 return;
             }
-            String unit = current.unitLabel().startsWith("CSD") ? "µV/m²" : current.unitLabel();
-            bench.pointer(time, channel, Texts.value(current.value(col, row), unit));
+            bench.pointer(currentTitle, "", Texts.value(current.value(col, row), unit));
         }
     }
 }

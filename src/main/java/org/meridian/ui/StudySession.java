@@ -11,6 +11,7 @@ import org.meridian.core.Waveforms;
 import org.meridian.maps.MapExtent;
 import org.meridian.maps.MapLayout;
 import org.meridian.maps.MapMaker;
+import org.meridian.maps.MapRaster;
 import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.ConditionWave;
 import org.meridian.span.SpanAnalysis;
@@ -42,6 +43,7 @@ public final class StudySession {
     private final MapLayout layout;
     private final ChannelTransform csd;
     private final Map<String, MapMaker> makers = new ConcurrentHashMap<>();
+    private final Map<String, MapRaster> rasters = new java.util.LinkedHashMap<>(8, 0.75f, true);
 
     private StudySession(Study study, Path source, String title) {
         this.study = study;
@@ -129,6 +131,38 @@ public final class StudySession {
         }
         return makers.computeIfAbsent(quantity + "@" + resolution,
                 k -> new MapMaker(spline, quantity, layout, resolution));
+    }
+
+    /** Nodes across the live map's coarse grid (the maps package's recommendation, 64–96). */
+    public static final int COARSE_NODES = 80;
+
+    /**
+     * The live map's raster for a display of {@code pixels} across, built on first use (tens of
+     * milliseconds: call off the event thread) and kept with the few last used.
+     */
+    public MapRaster raster(Quantity quantity, int pixels) {
+        String key = quantity + "@" + pixels;
+        synchronized (rasters) {
+            MapRaster r = rasters.get(key);
+            if (r != null) {
+                return r;
+            }
+        }
+        MapRaster built = new MapRaster(spline, quantity, layout, pixels, COARSE_NODES);
+        synchronized (rasters) {
+            rasters.put(key, built);
+            while (rasters.size() > 4) {
+                rasters.remove(rasters.keySet().iterator().next());
+            }
+        }
+        return built;
+    }
+
+    /** The raster when it is built already, else null (never builds: safe on the event thread). */
+    public MapRaster rasterIfBuilt(Quantity quantity, int pixels) {
+        synchronized (rasters) {
+            return rasters.get(quantity + "@" + pixels);
+        }
     }
 
     /** Builds the map weights the window needs at once; call off the event thread. */
