@@ -109,11 +109,15 @@ final class CorrelationMatrixView extends JComponent {
             g.setColor(theme.plotBackground());
             g.fillRect(0, 0, getWidth(), getHeight());
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            if (theme != Theme.LIGHT) {
+                g.setColor(theme.mapCard());
+                g.fillRoundRect(3, 2, getWidth() - 6, getHeight() - 4, 14, 14);
+            }
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             Font font = ChartStyle.tickFont();
             g.setFont(font);
             FontMetrics fm = g.getFontMetrics();
-            g.setColor(theme.ink());
+            g.setColor(theme.mapInk());
             String title = "Spatial correlation r";
             g.drawString(title, 6, fm.getAscent() + 2);
             if (data == null) {
@@ -132,7 +136,7 @@ final class CorrelationMatrixView extends JComponent {
             g.setColor(theme.faint());
             g.draw(cells);
             StabilityTrace t = data.trace();
-            g.setColor(theme.ink());
+            g.setColor(theme.mapInk());
             String a = Texts.ms(t.timeMs(0)).replace(" ms", "");
             String b = Texts.ms(t.timeMs(t.size() - 1));
             g.drawString(a, (float) left, (float) (top + side + fm.getAscent() + 2));

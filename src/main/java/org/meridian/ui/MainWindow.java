@@ -273,8 +273,9 @@ public final class MainWindow extends JFrame {
             int[] r = b.get();
             setBounds(new Rectangle(r[0], r[1], Math.max(r[2], 960), Math.max(r[3], 620)));
         } else {
-            setSize(1500, 940);
-            setLocationByPlatform(true);
+            java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment()
+                    .getMaximumWindowBounds();
+            setBounds(screen.x, screen.y, Math.min(screen.width, 1760), Math.min(screen.height, 1080));
         }
         SwingUtilities.invokeLater(() -> {
             for (JSplitPane p : new JSplitPane[] {outer, inner, centre, right}) {
@@ -284,7 +285,7 @@ public final class MainWindow extends JFrame {
                 } else if (p == outer) {
                     p.setDividerLocation(230);
                 } else if (p == inner) {
-                    p.setDividerLocation(0.64);
+                    p.setDividerLocation(0.6);
                 } else {
                     p.setDividerLocation(p == centre ? 0.55 : 0.5);
                 }

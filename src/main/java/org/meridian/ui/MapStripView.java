@@ -50,8 +50,14 @@ final class MapStripView extends JComponent {
     protected void paintComponent(Graphics graphics) {
         Graphics2D g = (Graphics2D) graphics.create();
         try {
-            g.setColor(bench.theme().plotBackground());
+            Theme theme = bench.theme();
+            g.setColor(theme.plotBackground());
             g.fillRect(0, 0, getWidth(), getHeight());
+            if (theme != Theme.LIGHT) {
+                g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+                g.setColor(theme.mapCard());
+                g.fillRoundRect(3, 2, getWidth() - 6, getHeight() - 4, 14, 14);
+            }
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             if (data == null || data.strip().isEmpty()) {
                 return;

@@ -16,17 +16,19 @@ import org.meridian.measure.MeasureTable;
  */
 final class MeasureRows extends AbstractTableModel {
     static final String[] KEYS = {"Participant", "Condition", "Channel"};
+    /** How the grand average's rows are named. */
+    static final String GRAND = "grand average";
 
     /** Readable names of the measures, in the registry's order. */
     private static final Map<String, String> TITLES = Map.of(
-            "mean", "Mean amplitude",
+            "mean", "Mean",
             "peak", "Peak",
             "peak-latency", "Peak latency",
             "local-peak", "Local peak",
-            "local-peak-latency", "Local peak latency",
+            "local-peak-latency", "Local peak lat.",
             "area", "Area",
-            "frac-area-latency", "Fractional area latency",
-            "frac-peak-latency", "Fractional peak latency");
+            "frac-area-latency", "Frac. area lat.",
+            "frac-peak-latency", "Frac. peak lat.");
 
     /** One row of the view: its keys, a value (or null) per measure column, and its wave. */
     private record ViewRow(String participant, String condition, String channel, Object[] values,
@@ -60,20 +62,20 @@ final class MeasureRows extends AbstractTableModel {
             }
             String key = r.participant() + "\u0000" + r.condition() + "\u0000" + r.channel();
             ViewRow v = byKey.computeIfAbsent(key, k -> new ViewRow(
-                    r.participant().equals(MeasureTable.GRAND) ? "grand average" : r.participant(),
+                    r.participant().equals(MeasureTable.GRAND) ? GRAND : r.participant(),
                     r.condition(), r.channel(), new Object[measures.size()],
                     series.of(r.participant(), r.condition(), r.channel())));
             int base = r.measure().indexOf(" (");
             String name = base < 0 ? r.measure() : r.measure().substring(0, base);
             int column = indexOf(name);
             if (column >= 0) {
-                v.values()[column] = r.isEmpty() ? null : new Value(r.value(), base >= 0);
+                v.values()[column] = r.isEmpty() ? null : new Value(r.value(), base >= 0, r.unit());
             }
         }
         List<ViewRow> grandLast = new ArrayList<>();
         List<ViewRow> grand = new ArrayList<>();
         for (ViewRow v : byKey.values()) {
-            (v.participant().equals("grand average") ? grand : grandLast).add(v);
+            (v.participant().equals(GRAND) ? grand : grandLast).add(v);
         }
         grand.addAll(grandLast);
         this.rows = grand;
@@ -108,8 +110,11 @@ final class MeasureRows extends AbstractTableModel {
         return -1;
     }
 
-    /** A measured value; {@code standIn} when it replaces a missing one. */
-    record Value(double value, boolean standIn) implements Comparable<Value> {
+    /**
+     * A measured value; {@code standIn} when it replaces a missing one. Shown rounded (two
+     * decimals for amplitudes, one for times and areas); exported in full by the tidy table.
+     */
+    record Value(double value, boolean standIn, String unit) implements Comparable<Value> {
         @Override
         public int compareTo(Value o) {
             return Double.compare(value, o.value);
@@ -117,7 +122,8 @@ final class MeasureRows extends AbstractTableModel {
 
         @Override
         public String toString() {
-            String s = MeasureTable.formatValue(value);
+            boolean coarse = unit.equals("ms") || unit.contains("·");
+            String s = String.format(java.util.Locale.ROOT, coarse ? "%.1f" : "%.2f", value).replace('-', '−');
             return standIn ? s + " *" : s;
         }
     }
@@ -157,7 +163,7 @@ final class MeasureRows extends AbstractTableModel {
             case 1 -> r.condition();
             case 2 -> r.channel();
             case 3 -> r.series() == null || cursorSample < 0 || cursorSample >= r.series().length ? null
-                    : new Value(r.series()[cursorSample], false);
+                    : new Value(r.series()[cursorSample], false, dataUnit);
             default -> r.values()[column - KEYS.length - 1];
         };
     }

@@ -280,7 +280,10 @@ final class MeasuresPanel extends JPanel {
         }
     }
 
-    /** The rows on screen, in their sorted order, as tab-separated text with a header line. */
+    /**
+     * The rows on screen, in their sorted order, as tab-separated text with a header line; values
+     * in full precision with a plain minus, so a spreadsheet reads them as numbers.
+     */
     String rowsAsTsv() {
         StringBuilder sb = new StringBuilder();
         for (int c = 0; c < table.getColumnCount(); c++) {
@@ -290,7 +293,9 @@ final class MeasuresPanel extends JPanel {
         for (int r = 0; r < table.getRowCount(); r++) {
             for (int c = 0; c < table.getColumnCount(); c++) {
                 Object v = table.getValueAt(r, c);
-                sb.append(c == 0 ? "" : "\t").append(v == null ? "" : v);
+                String text = v == null ? ""
+                        : v instanceof MeasureRows.Value m ? MeasureTable.formatValue(m.value()) : v.toString();
+                sb.append(c == 0 ? "" : "\t").append(text);
             }
             sb.append('\n');
         }

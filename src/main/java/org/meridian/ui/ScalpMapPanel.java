@@ -273,10 +273,15 @@ final class ScalpMapPanel extends JPanel {
                 Theme theme = bench.theme();
                 g.setColor(theme.plotBackground());
                 g.fillRect(0, 0, getWidth(), getHeight());
+                g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
                 g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+                if (theme != Theme.LIGHT) {
+                    g.setColor(theme.mapCard());
+                    g.fillRoundRect(3, 3, getWidth() - 6, getHeight() - 6, 14, 14);
+                }
                 StudySession session = bench.model().session();
                 if (session != null && !session.hasMaps()) {
-                    g.setColor(theme.ink());
+                    g.setColor(theme.mapInk());
                     g.drawString("No scalp map: " + session.whyNoMaps(), 8, 20);
                     return;
                 }

@@ -64,17 +64,17 @@ final class SpanPanel extends JPanel {
         row.add(title);
         scope.setName("span.scope");
         row.add(scope);
-        row.add(new JLabel("  Maps:"));
         count.setName("span.count");
         count.setToolTipText("How many maps the strip spreads evenly across the window");
         count.addChangeListener(e -> recompute());
-        row.add(count);
         header.add(row, BorderLayout.CENTER);
         JPanel test = new JPanel(new FlowLayout(FlowLayout.RIGHT, 4, 2));
+        test.add(new JLabel("Maps:"));
+        test.add(count);
         patterns.setName("span.patterns");
         patterns.setToolTipText("Random sign patterns when there are more than 16 participants (up to 16: all patterns)");
         ((JSpinner.DefaultEditor) patterns.getEditor()).getTextField().setColumns(7);
-        test.add(new JLabel("Patterns:"));
+        test.add(new JLabel("  Patterns:"));
         test.add(patterns);
         run.setName("span.run");
         run.setToolTipText("<html>Does one map, at whatever strength, account for the whole window in every "

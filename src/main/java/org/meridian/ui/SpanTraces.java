@@ -73,7 +73,8 @@ final class SpanTraces {
             }
         }
         NumberAxis dissAxis = axisNamed("DISS", false);
-        dissAxis.setRange(0, 2);
+        dissAxis.setRange(0, 2.2);
+        dissAxis.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(1));
         XYPlot dissPlot = plot(new XYSeriesCollection(diss), dissAxis, theme.ink(), ChartStyle.WAVE);
 
         NumberAxis stateAxis = axisNamed("States", false);
@@ -86,10 +87,13 @@ final class SpanTraces {
             Color c = theme.wave(s.state() + 3);
             states.addAnnotation(new XYBoxAnnotation(s.startMs() - half, 0.1, s.endMs() + half, 0.9,
                     new BasicStroke(0.5f), theme.plotBackground(), c));
-            XYTextAnnotation label = new XYTextAnnotation(String.valueOf(s.state()), (s.startMs() + s.endMs()) / 2, 0.5);
-            label.setFont(ChartStyle.font(ChartStyle.tickFont().getSize2D(), Font.BOLD));
-            label.setPaint(Color.WHITE);
-            states.addAnnotation(label);
+            if (s.samples() >= 3) {
+                XYTextAnnotation label = new XYTextAnnotation(String.valueOf(s.state()), (s.startMs() + s.endMs()) / 2, 0.5);
+                label.setFont(ChartStyle.font(ChartStyle.tickFont().getSize2D(), Font.BOLD));
+                label.setPaint(Color.WHITE);
+                label.setToolTipText("State " + s.state() + ": " + Texts.window(s.startMs(), s.endMs()));
+                states.addAnnotation(label);
+            }
         }
         double split = axis.timeMs(window.lateFirst()) - axis.stepMs() / 2;
         for (XYPlot p : new XYPlot[] {gfpPlot, dissPlot, states}) {

@@ -55,6 +55,20 @@ public enum Theme {
         return plotBackground;
     }
 
+    /**
+     * The ground under scalp maps, map strips and the correlation matrix. The maps package draws
+     * outlines, contours and colour-bar labels in near-black ink, as on paper; in the dark theme
+     * the maps therefore sit on a light card so that ink stays readable.
+     */
+    public Color mapCard() {
+        return this == LIGHT ? plotBackground : new Color(0xdfe1e5);
+    }
+
+    /** Ink on {@link #mapCard()}. */
+    public Color mapInk() {
+        return this == LIGHT ? ink : new Color(0x26, 0x26, 0x26);
+    }
+
     /** Axis lines, tick labels, titles. */
     public Color ink() {
         return ink;
