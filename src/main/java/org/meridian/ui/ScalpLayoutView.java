@@ -36,6 +36,8 @@ final class ScalpLayoutView extends JComponent {
     private final Workbench bench;
     private List<Slot> slots = List.of();
     private double valueLimit = 1;
+    private java.awt.image.BufferedImage plots;
+    private Object plotsKey;
     private Slot dragging;
 
     /** A small plot: its channel and its box in component pixels. */
@@ -157,33 +159,43 @@ final class ScalpLayoutView extends JComponent {
             }
         }
         double spacing = nearestSpacing(plane);
-        double minX = -1.1;
-        double maxX = 1.1;
-        double minY = -1.1;
-        double maxY = 1.1;
+        double minX = Double.MAX_VALUE;
+        double maxX = -Double.MAX_VALUE;
+        double minY = Double.MAX_VALUE;
+        double maxY = -Double.MAX_VALUE;
         for (double[] p : plane) {
-            minX = Math.min(minX, p[0] - spacing);
-            maxX = Math.max(maxX, p[0] + spacing);
-            minY = Math.min(minY, p[1] - spacing);
-            maxY = Math.max(maxY, p[1] + spacing);
+            minX = Math.min(minX, p[0] - spacing * 0.6);
+            maxX = Math.max(maxX, p[0] + spacing * 0.6);
+            minY = Math.min(minY, p[1] - spacing * 0.6);
+            maxY = Math.max(maxY, p[1] + spacing * 0.6);
+        }
+        if (plane.isEmpty()) {
+            minX = -1;
+            maxX = 1;
+            minY = -1;
+            maxY = 1;
         }
         double looseRow = loose.isEmpty() ? 0 : spacing * 1.2;
         double w = getWidth();
-        double h = getHeight();
-        double scale = Math.min(w / (maxX - minX), h / (maxY - minY + looseRow));
-        double boxW = spacing * scale * 0.94;
-        double boxH = spacing * scale * 0.62;
-        double x0 = (w - (maxX - minX) * scale) / 2;
-        double y0 = (h - (maxY - minY + looseRow) * scale) / 2;
+        double h = getHeight() - 8;
+        // the head is stretched to the panel (plots are wider than tall), within a factor of 2.2
+        double sx = w / (maxX - minX);
+        double sy = h / (maxY - minY + looseRow);
+        sx = Math.min(sx, 2.2 * sy);
+        sy = Math.min(sy, sx);
+        double boxW = spacing * sx * 0.92;
+        double boxH = spacing * sy * 0.78;
+        double x0 = (w - (maxX - minX) * sx) / 2;
+        double y0 = 4 + (h - (maxY - minY + looseRow) * sy) / 2;
         List<Slot> out = new ArrayList<>();
         for (int i = 0; i < placed.size(); i++) {
-            double cx = x0 + (plane.get(i)[0] - minX) * scale;
-            double cy = y0 + (maxY - plane.get(i)[1]) * scale;
+            double cx = x0 + (plane.get(i)[0] - minX) * sx;
+            double cy = y0 + (maxY - plane.get(i)[1]) * sy;
             out.add(new Slot(placed.get(i), new Rectangle2D.Double(cx - boxW / 2, cy - boxH / 2, boxW, boxH)));
         }
         for (int i = 0; i < loose.size(); i++) {
             double cx = x0 + boxW / 2 + i * boxW * 1.1;
-            double cy = y0 + (maxY - minY + looseRow * 0.5) * scale;
+            double cy = y0 + (maxY - minY + looseRow * 0.5) * sy;
             out.add(new Slot(loose.get(i), new Rectangle2D.Double(cx - boxW / 2, cy - boxH / 2, boxW, boxH)));
         }
         slots = out;
@@ -218,6 +230,33 @@ final class ScalpLayoutView extends JComponent {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             layoutSlots();
+            double scale = g.getTransform().getScaleX();
+            Object key = java.util.List.of(getWidth(), getHeight(), scale, bench.model().averages(),
+                    bench.state().shownWaves(), bench.state().selectedChannels(), bench.state().polarity(),
+                    bench.state().windowStartMs(), bench.state().windowEndMs(), theme);
+            if (plots == null || !key.equals(plotsKey)) {
+                plots = drawPlots(theme, scale);
+                plotsKey = key;
+            }
+            g.drawImage(plots, 0, 0, getWidth(), getHeight(), null);
+            drawCursors(g, theme);
+        } finally {
+            g.dispose();
+        }
+    }
+
+    /** The small plots without the cursor, at device resolution (redrawn when they change). */
+    private java.awt.image.BufferedImage drawPlots(Theme theme, double scale) {
+        java.awt.image.BufferedImage img = new java.awt.image.BufferedImage(
+                Math.max(1, (int) Math.round(getWidth() * scale)), Math.max(1, (int) Math.round(getHeight() * scale)),
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        try {
+            g.scale(scale, scale);
+            g.setColor(theme.plotBackground());
+            g.fillRect(0, 0, getWidth(), getHeight());
+            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             List<Averages.WaveAverage> waves = bench.state().shownWaves().stream()
                     .map(bench.model().averages()::wave).filter(java.util.Objects::nonNull).toList();
             valueLimit = limit(waves);
@@ -229,6 +268,21 @@ final class ScalpLayoutView extends JComponent {
             drawScale(g, theme, waves);
         } finally {
             g.dispose();
+        }
+        return img;
+    }
+
+    /** The time cursor in every small plot. */
+    private void drawCursors(Graphics2D g, Theme theme) {
+        ViewState state = bench.state();
+        TimeAxis axis = state.axis();
+        double span = axis.lastMs() - axis.firstMs();
+        g.setColor(theme.cursor());
+        g.setStroke(new BasicStroke(1f));
+        for (Slot s : slots) {
+            Rectangle2D b = s.box();
+            double cx = b.getX() + (state.cursorMs() - axis.firstMs()) / span * b.getWidth();
+            g.draw(new Line2D.Double(cx, b.getY(), cx, b.getMaxY()));
         }
     }
 
@@ -287,10 +341,6 @@ final class ScalpLayoutView extends JComponent {
             g.setColor(theme.wave(w.entry().colourIndex()));
             g.draw(path);
         }
-        double cx = b.getX() + (state.cursorMs() - axis.firstMs()) / span * b.getWidth();
-        g.setColor(theme.cursor());
-        g.setStroke(new BasicStroke(1f));
-        g.draw(new Line2D.Double(cx, b.getY(), cx, b.getMaxY()));
         int rank = indexIgnoringCase(state.selectedChannels(), s.channel());
         if (rank == 0) {
             g.setColor(theme.selection());
@@ -315,7 +365,7 @@ final class ScalpLayoutView extends JComponent {
         }
         String unit = waves.get(0).grand().unit().symbol();
         double boxH = slotHeight();
-        double length = ScaleBar.roundLength(2 * valueLimit);
+        double length = ScaleBar.roundLength(4 * valueLimit);
         double pixels = boxH / 2 / valueLimit * length;
         Font font = ChartStyle.tickFont();
         double x = 16;
