@@ -123,7 +123,7 @@ final class CorrelationMatrixView extends JComponent {
             if (data == null) {
                 return;
             }
-            double barW = 46;
+            double barW = 60;
             double top = fm.getHeight() + 6;
             double left = fm.stringWidth("−000") + 8;
             double side = Math.max(20, Math.min(getWidth() - left - barW - 10, getHeight() - top - fm.getHeight() - 8));
@@ -152,8 +152,9 @@ final class CorrelationMatrixView extends JComponent {
                 g.draw(new Line2D.Double(x, top, x, top + side));
                 g.draw(new Line2D.Double(left, y, left + side, y));
             }
+            double readable = Math.max(1, ChartStyle.tickFont().getSize2D() / (side * 0.055));
             ColourBar.draw(g, new Rectangle2D.Double(left + side + 6, top, barW, side),
-                    bench.state().colourScale(), new ColourLimits(-1, 1), "r", 1.0);
+                    bench.state().colourScale(), new ColourLimits(-1, 1), "r", readable);
         } finally {
             g.dispose();
         }

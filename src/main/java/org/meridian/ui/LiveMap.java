@@ -49,7 +49,7 @@ final class LiveMap {
 
     /** Where the map's square goes in a panel (whole device pixels), with room for the colour bar. */
     static Rectangle2D mapBounds(double width, double height, double deviceScale) {
-        double barWidth = Math.max(56, Math.min(90, width * 0.18));
+        double barWidth = Math.max(80, Math.min(124, width * 0.24));
         double side = Math.max(10, Math.min(width - barWidth - 12, height - 12));
         side = Math.floor(side * deviceScale) / deviceScale;
         double x = Math.max(6, Math.floor((width - barWidth - side) / 2));
@@ -60,8 +60,8 @@ final class LiveMap {
     /** The colour bar's place beside a map. */
     static Rectangle2D barBounds(Rectangle2D map) {
         double side = map.getWidth();
-        return new Rectangle2D.Double(map.getMaxX() + 8, map.getY() + side * 0.1,
-                Math.max(48, Math.min(82, side * 0.22)), side * 0.8);
+        return new Rectangle2D.Double(map.getMaxX() + 6, map.getY() + side * 0.1,
+                Math.max(70, Math.min(116, side * 0.3)), side * 0.8);
     }
 
     /**
