@@ -43,6 +43,7 @@ final class CsdCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SplineParameters parameters = spline.parameters();
+        StudyWriter.requireApartFromInput(study, output);
         Study in = StudyLoader.load(study);
         Study csd = SurfaceLaplacian.of(in, parameters);
         StudyWriter.write(csd, output, new StudyWriter.Options(false, decimals, force));

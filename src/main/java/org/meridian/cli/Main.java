@@ -24,6 +24,7 @@ import picocli.CommandLine.Option;
             CsdCommand.class,
             RepairCommand.class,
             MapsCommand.class,
+            MeasureCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;

@@ -18,7 +18,7 @@ import org.meridian.maps.MapMoment;
 import org.meridian.maps.MapStrip;
 import org.meridian.maps.MapStyle;
 import org.meridian.maps.ScalpMap;
-import org.meridian.signal.GrandAverage;
+import org.meridian.signal.ConditionExpression;
 import org.meridian.spline.Quantity;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -136,18 +136,10 @@ final class MapsCommand implements Callable<Integer> {
         return Main.EXIT_OK;
     }
 
-    /**
-     * The grand average of the condition to map. Until contrast expressions exist in the signal
-     * package, EXPR is the name of one loaded condition; this is the one place to change when
-     * they do.
-     */
+    /** The grand average of the condition or contrast to map ({@code rare - frequent}). */
     static Waveforms grandAverage(Study study, String expression) {
-        int c = study.conditionIndex(expression.trim());
-        if (c < 0) {
-            throw new BadInputException("option --condition: " + study.name() + " has no condition \""
-                    + expression + "\" (conditions: " + String.join(", ", study.conditions()) + ")");
-        }
-        return GrandAverage.of(study, c);
+        return OptionErrors.about("--condition", () -> ConditionExpression.parse(expression, study))
+                .grandAverage(study);
     }
 
     private List<MapMoment> parseMoments() {

@@ -47,6 +47,7 @@ final class RepairCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SplineParameters parameters = spline.parameters();
+        StudyWriter.requireApartFromInput(study, output);
         Study in = StudyLoader.load(study);
         ChannelRepair repair = ChannelRepair.forStudy(in, channels, parameters);
         Study repaired = repair.of(in);

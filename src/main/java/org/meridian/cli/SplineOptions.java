@@ -1,6 +1,5 @@
 package org.meridian.cli;
 
-import org.meridian.core.BadInputException;
 import org.meridian.spline.SplineParameters;
 import picocli.CommandLine.Option;
 
@@ -25,18 +24,11 @@ final class SplineOptions {
 
     /** The parameters; a bad value is an error naming its option. */
     SplineParameters parameters() {
-        checked("--m", () -> SplineParameters.defaults().withOrder(order));
-        checked("--lambda", () -> SplineParameters.defaults().withLambda(lambda));
-        checked("--terms", () -> SplineParameters.defaults().withTerms(terms));
-        checked("--radius-m", () -> SplineParameters.defaults().withHeadRadiusM(radiusM));
+        OptionErrors.about("--m", () -> SplineParameters.defaults().withOrder(order));
+        OptionErrors.about("--lambda", () -> SplineParameters.defaults().withLambda(lambda));
+        OptionErrors.about("--terms", () -> SplineParameters.defaults().withTerms(terms));
+        OptionErrors.about("--radius-m", () -> SplineParameters.defaults().withHeadRadiusM(radiusM));
         return new SplineParameters(order, lambda, terms, radiusM);
     }
 
-    private static SplineParameters checked(String option, java.util.function.Supplier<SplineParameters> make) {
-        try {
-            return make.get();
-        } catch (BadInputException e) {
-            throw new BadInputException("option " + option + ": " + e.getMessage(), e);
-        }
-    }
 }

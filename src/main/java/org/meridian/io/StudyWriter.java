@@ -57,6 +57,32 @@ public final class StudyWriter {
         }
     }
 
+    /**
+     * Refuses an output folder that would replace or swallow the input study: the folder the
+     * STUDY argument names (or lies in), or any folder that contains it. Commands that read one
+     * study and write another call this before loading, so even {@code --force} never deletes
+     * an input.
+     */
+    public static void requireApartFromInput(Path studyArgument, Path outputFolder) {
+        Path input = studyArgument.toAbsolutePath().normalize();
+        Path inputFolder = java.nio.file.Files.isDirectory(input) ? input : input.getParent();
+        Path out = outputFolder.toAbsolutePath().normalize();
+        try {
+            if (java.nio.file.Files.exists(out)) {
+                out = out.toRealPath();
+            }
+            if (inputFolder != null && java.nio.file.Files.exists(inputFolder)) {
+                inputFolder = inputFolder.toRealPath();
+            }
+        } catch (java.io.IOException e) {
+            throw new BadInputException("cannot resolve " + outputFolder + ": " + e.getMessage(), e);
+        }
+        if (inputFolder != null && inputFolder.startsWith(out)) {
+            throw new BadInputException("option -o: " + outputFolder + " holds the input study "
+                    + studyArgument + "; write the result to another folder");
+        }
+    }
+
     public static void write(Study study, Path folder, Options options) {
         if (options.decimals() < 0 || options.decimals() > FixedDecimals.MAX_DECIMALS) {
             throw new BadInputException("decimals must be between 0 and "

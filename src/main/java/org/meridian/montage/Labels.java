@@ -100,7 +100,7 @@ public final class Labels {
     }
 
     /** Levenshtein distance (insertions, deletions and substitutions each cost one). */
-    static int editDistance(String a, String b) {
+    public static int editDistance(String a, String b) {
         int[] prev = new int[b.length() + 1];
         int[] cur = new int[b.length() + 1];
         for (int j = 0; j <= b.length(); j++) {

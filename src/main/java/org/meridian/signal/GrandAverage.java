@@ -2,6 +2,7 @@ package org.meridian.signal;
 
 import java.util.Set;
 import java.util.function.IntFunction;
+import java.util.function.IntToDoubleFunction;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
@@ -9,6 +10,7 @@ import org.meridian.core.Waveforms;
 /**
  * The grand average of one condition over participants: the unweighted mean by default, or the
  * mean weighted by each participant's trial count. Participants can be left out by name.
+ * Derived waves ({@link ConditionWave}) are computed per participant, then averaged.
  */
 public final class GrandAverage {
     private GrandAverage() {
@@ -28,6 +30,15 @@ public final class GrandAverage {
     }
 
     /**
+     * The grand average of a loaded or derived wave; its trial weights come from
+     * {@link ConditionWave#trialWeight}.
+     */
+    public static Waveforms of(Study study, ConditionWave wave, Weighting weighting, Set<String> excluded) {
+        return average(study, p -> wave.forParticipant(study, p), weighting, excluded,
+                p -> wave.trialWeight(study, p));
+    }
+
+    /**
      * The grand average of per-participant waveforms (a loaded condition or a derived one).
      *
      * @param perParticipant the waveforms of participant {@code p}
@@ -37,23 +48,66 @@ public final class GrandAverage {
      */
     public static Waveforms of(Study study, IntFunction<Waveforms> perParticipant,
             Weighting weighting, Set<String> excluded, IntFunction<Integer> trials) {
-        double[] sum = null;
-        double totalWeight = 0;
-        Waveforms first = null;
-        for (int p = 0; p < study.participants().size(); p++) {
+        return average(study, perParticipant, weighting, excluded, p -> trials.apply(p));
+    }
+
+    /** Whether a participant is among the excluded names (ignoring case). */
+    public static boolean isExcluded(String participant, Set<String> excluded) {
+        return excluded.stream().anyMatch(participant::equalsIgnoreCase);
+    }
+
+    /**
+     * The weight of each participant (0 for excluded ones), checked: every included participant
+     * needs a trial count under {@link Weighting#TRIALS}, and the weights must not add up to 0.
+     */
+    public static double[] weights(Study study, Weighting weighting, Set<String> excluded,
+            IntToDoubleFunction trials) {
+        for (String name : excluded) {
+            if (study.participantIndex(name) < 0) {
+                throw new BadInputException("cannot exclude participant " + name + ": "
+                        + study.name() + " has no such participant");
+            }
+        }
+        double[] w = new double[study.participants().size()];
+        double total = 0;
+        int included = 0;
+        for (int p = 0; p < w.length; p++) {
             String name = study.participants().get(p);
-            if (excluded.stream().anyMatch(name::equalsIgnoreCase)) {
+            if (isExcluded(name, excluded)) {
                 continue;
             }
-            double w = 1;
+            included++;
+            w[p] = 1;
             if (weighting == Weighting.TRIALS) {
-                int t = trials.apply(p);
+                double t = trials.applyAsDouble(p);
                 if (t < 0) {
                     throw new BadInputException("a trial-weighted grand average needs trial counts, "
                             + "and participant " + name + " has none in " + study.name());
                 }
-                w = t;
+                w[p] = t;
             }
+            total += w[p];
+        }
+        if (included == 0) {
+            throw new BadInputException("no participants left for the grand average");
+        }
+        if (!(total > 0)) {
+            throw new BadInputException("the trial counts of " + study.name() + " add up to zero");
+        }
+        return w;
+    }
+
+    private static Waveforms average(Study study, IntFunction<Waveforms> perParticipant,
+            Weighting weighting, Set<String> excluded, IntToDoubleFunction trials) {
+        double[] weight = weights(study, weighting, excluded, trials);
+        double[] sum = null;
+        double totalWeight = 0;
+        Waveforms first = null;
+        for (int p = 0; p < weight.length; p++) {
+            if (GrandAverage.isExcluded(study.participants().get(p), excluded)) {
+                continue;
+            }
+            double w = weight[p];
             Waveforms wf = perParticipant.apply(p);
             if (first == null) {
                 first = wf;
@@ -66,12 +120,6 @@ public final class GrandAverage {
                 }
             }
             totalWeight += w;
-        }
-        if (first == null) {
-            throw new BadInputException("no participants left for the grand average");
-        }
-        if (!(totalWeight > 0)) {
-            throw new BadInputException("the trial counts of " + study.name() + " add up to zero");
         }
         float[] out = new float[sum.length];
         for (int i = 0; i < sum.length; i++) {

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.stream.Stream;
@@ -83,6 +84,21 @@ class SplineCommandsTest {
         CliRun twice = CliRun.of("csd", out.toString(), "-o", dir.resolve("csd2").toString());
         assertThat(twice.exitCode()).isEqualTo(2);
         assertThat(twice.err()).contains("already CSD");
+    }
+
+    @Test
+    void evenWithForceTheInputStudyIsNeverReplaced() throws Exception {
+        Path in = SplineCommandFixture.write((x, y, z) -> z, dir.resolve("in"));
+        byte[] manifest = Files.readAllBytes(in.resolve("study.tsv"));
+        for (Path target : List.of(in, dir)) {
+            CliRun r = CliRun.of("csd", in.toString(), "-o", target.toString(), "--force");
+            assertThat(r.exitCode()).isEqualTo(2);
+            assertThat(r.err()).startsWith("error: option -o: ").contains("holds the input study");
+            CliRun repair = CliRun.of("repair", in.resolve("study.tsv").toString(), "--channels", "C3",
+                    "-o", target.toString(), "--force");
+            assertThat(repair.exitCode()).isEqualTo(2);
+        }
+        assertThat(Files.readAllBytes(in.resolve("study.tsv"))).isEqualTo(manifest);
     }
 
     @Test
