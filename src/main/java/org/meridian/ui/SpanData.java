@@ -6,6 +6,7 @@ import org.meridian.core.Waveforms;
 import org.meridian.maps.MapMaker;
 import org.meridian.maps.MapMoment;
 import org.meridian.maps.ScalpMap;
+import org.meridian.signal.TimeWindow;
 import org.meridian.span.Segmentation;
 import org.meridian.span.SpanSettings;
 import org.meridian.span.SpanWindow;
@@ -29,7 +30,7 @@ record SpanData(String wave, MapQuantity quantity, SpanWindow window, List<Scalp
             double startMs, double endMs, int mapCount, Tasks.TaskProgress progress) {
         Waveforms field = quantity == MapQuantity.CSD ? wave.csd()
                 : wave.grand().select(session.fieldChannels());
-        SpanWindow window = SpanWindow.middle(field.axis(), startMs, endMs, "window");
+        SpanWindow window = SpanWindow.middle(field.axis(), new TimeWindow(startMs, endMs), "window");
         List<ScalpMap> strip = new ArrayList<>();
         double maxAbs = 0;
         if (session.hasMaps()) {

@@ -15,16 +15,16 @@ import org.meridian.maps.MapRaster;
 import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.ConditionWave;
 import org.meridian.span.SpanAnalysis;
-import org.meridian.spline.ChannelTransform;
 import org.meridian.spline.Quantity;
 import org.meridian.spline.SphericalSpline;
 import org.meridian.spline.SplineParameters;
+import org.meridian.spline.SurfaceLaplacian;
 
 /**
  * An opened study with everything that depends on it alone, built once off the event thread:
  * the loaded conditions as waves, the scalp field's channels (the positioned ones), the spherical
- * spline fitted to their positions, the map layout, and the transform of the field's channels to
- * their CSD. Immutable; {@link #hasMaps()} is false when fewer than four channels have a position,
+ * spline fitted to their positions and the surface Laplacian it gives ({@link SurfaceLaplacian}),
+ * and the map layout. Immutable; {@link #hasMaps()} is false when fewer than four channels have a position,
  * and then the map, strip and CSD stay empty with a note saying why.
  */
 public final class StudySession {
@@ -41,7 +41,7 @@ public final class StudySession {
     private final List<String> fieldChannels;
     private final SphericalSpline spline;
     private final MapLayout layout;
-    private final ChannelTransform csd;
+    private final SurfaceLaplacian csd;
     private final Map<String, MapMaker> makers = new ConcurrentHashMap<>();
     private final Map<String, MapRaster> rasters = new java.util.LinkedHashMap<>(8, 0.75f, true);
 
@@ -56,10 +56,9 @@ public final class StudySession {
         this.conditions = List.copyOf(c);
         this.fieldChannels = List.copyOf(SpanAnalysis.fieldChannels(study));
         if (study.montage().size() >= SphericalSpline.MIN_CHANNELS) {
-            this.spline = SphericalSpline.fit(study.montage().select(positioned(study)),
-                    SplineParameters.defaults());
+            this.csd = new SurfaceLaplacian(study.montage(), SplineParameters.defaults());
+            this.spline = csd.spline();
             this.layout = new MapLayout(spline.montage(), MapExtent.electrodes());
-            this.csd = spline.transformAt(Quantity.CSD, spline.montage().electrodes());
         } else {
             this.spline = null;
             this.layout = null;
@@ -184,19 +183,6 @@ public final class StudySession {
         if (csd == null) {
             throw new IllegalStateException(whyNoMaps());
         }
-        int[] rows = spline.rowsIn(potential);
-        float[] values = csd.apply(potential, rows);
-        return Waveforms.wrap(spline.labels(), potential.axis(),
-                Quantity.CSD.outputUnit(potential.unit()), values);
-    }
-
-    private static List<String> positioned(Study study) {
-        List<String> out = new ArrayList<>();
-        for (String l : study.channelLabels()) {
-            if (study.montage().contains(l)) {
-                out.add(l);
-            }
-        }
-        return out;
+        return csd.of(potential);
     }
 }

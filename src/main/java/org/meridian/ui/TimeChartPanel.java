@@ -100,7 +100,7 @@ final class TimeChartPanel extends ChartPanel {
         }
         double t = bench.state().snap(xToMs(e.getX()));
         XYPlot plot = plotAt(e.getX(), e.getY());
-        if (plot == null) {
+        if (plot == null || plot.getRangeAxis() == null) {
             return;
         }
         double v = plot.getRangeAxis().java2DToValue(e.getY(), area, RectangleEdge.LEFT);
