@@ -25,6 +25,7 @@ import picocli.CommandLine.Option;
             RepairCommand.class,
             MapsCommand.class,
             MeasureCommand.class,
+            SpanCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;
