@@ -3,7 +3,6 @@ package org.meridian.ui;
 import java.awt.BorderLayout;
 import java.awt.CardLayout;
 import java.awt.Dimension;
-import java.awt.FlowLayout;
 import java.util.EnumMap;
 import java.util.Map;
 import javax.swing.BorderFactory;
