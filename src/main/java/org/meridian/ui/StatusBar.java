@@ -57,9 +57,10 @@ final class StatusBar extends JPanel implements Tasks.Observer {
         cancel.putClientProperty("JButton.buttonType", "borderless");
         cancel.setToolTipText("Stop the running task");
         cancel.addActionListener(e -> {
-            if (shown != null) {
-                shown.cancel();
-                message.setText(shown.label() + ": cancelled");
+            Tasks.Task task = shown;
+            if (task != null) {
+                task.cancel();
+                showMessage(task.label() + ": cancelled");
             }
         });
         work.add(taskLabel);
