@@ -129,8 +129,6 @@ final class SpanCommand implements Callable<Integer> {
         return Main.EXIT_OK;
     }
 
-    /** Runs a step that reads an option, naming the option in its error. */
-
     /** An export must never replace the study it reads. */
     private void refuseToOverwrite(Path target, String option) {
         if (target != null && Files.exists(target) && Files.exists(study)) {
