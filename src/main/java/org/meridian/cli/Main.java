@@ -20,6 +20,7 @@ import picocli.CommandLine.Option;
             MontageCommand.class,
             InfoCommand.class,
             SimulateCommand.class,
+            ViewCommand.class,
             CsdCommand.class,
             RepairCommand.class,
             MapsCommand.class,
@@ -38,8 +39,11 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        // no command: the window on the demo study, once the window exists
-        new CommandLine(this).usage(System.out);
+        try {
+            new ViewCommand().call();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     public static void main(String[] args) {

@@ -1,0 +1,57 @@
+package org.meridian.ui;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.meridian.core.Waveforms;
+import org.meridian.maps.MapMaker;
+import org.meridian.maps.MapMoment;
+import org.meridian.maps.ScalpMap;
+import org.meridian.signal.TimeWindow;
+import org.meridian.span.Segmentation;
+import org.meridian.span.SpanSettings;
+import org.meridian.span.SpanWindow;
+import org.meridian.span.StabilityTrace;
+import org.meridian.span.TopographicClustering;
+import org.meridian.span.WindowMaps;
+
+/**
+ * What the span view draws for one wave, window and quantity, computed off the event thread by
+ * the span package: the maps of the strip (evenly spaced across the window, first and last on
+ * the window's edges), the stability trace (GFP, DISS against the map at the GFP maximum, the
+ * correlation matrix) and the segmentation into topographic states. Immutable.
+ */
+record SpanData(String wave, MapQuantity quantity, SpanWindow window, List<ScalpMap> strip,
+        double stripMaxAbs, StabilityTrace trace, Segmentation segmentation) {
+
+    /** The k-means restarts of the live segmentation (fewer than the command's, for speed). */
+    static final int RESTARTS = 8;
+
+    static SpanData compute(StudySession session, Averages.WaveAverage wave, MapQuantity quantity,
+            double startMs, double endMs, int mapCount, Tasks.TaskProgress progress) {
+        Waveforms field = quantity == MapQuantity.CSD ? wave.csd()
+                : wave.grand().select(session.fieldChannels());
+        SpanWindow window = SpanWindow.middle(field.axis(), new TimeWindow(startMs, endMs), "window");
+        List<ScalpMap> strip = new ArrayList<>();
+        double maxAbs = 0;
+        if (session.hasMaps()) {
+            MapMaker maker = session.maker(quantity.quantity(), StudySession.LIVE_RESOLUTION);
+            List<MapMoment> moments = new ArrayList<>();
+            for (int i = 0; i < mapCount; i++) {
+                double t = mapCount == 1 ? (startMs + endMs) / 2
+                        : startMs + i * (endMs - startMs) / (mapCount - 1);
+                moments.add(MapMoment.at(field.axis().timeMs(field.axis().nearestIndex(t))));
+            }
+            strip = maker.maps(wave.grand(), moments);
+            for (ScalpMap m : strip) {
+                maxAbs = Math.max(maxAbs, m.maxAbs());
+            }
+        }
+        progress.checkCancelled();
+        WindowMaps maps = new WindowMaps(field, window);
+        StabilityTrace trace = StabilityTrace.of(maps, -1);
+        progress.checkCancelled();
+        Segmentation segmentation = new TopographicClustering(SpanSettings.DEFAULT_MAX_STATES,
+                RESTARTS, SpanSettings.DEFAULT_SEED).segment(maps);
+        return new SpanData(wave.name(), quantity, window, strip, maxAbs, trace, segmentation);
+    }
+}
