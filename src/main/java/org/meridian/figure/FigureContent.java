@@ -92,6 +92,12 @@ public final class FigureContent {
 
     /** Computes the figure's content. */
     public static FigureContent of(FigureSpec spec, Study study) {
+        for (String name : spec.excludedParticipants()) {
+            if (study.participantIndex(name) < 0) {
+                throw new BadInputException("excluded_participants: " + study.name() + " has no participant " + name
+                        + " (participants: " + String.join(", ", study.participants()) + ")");
+            }
+        }
         Map<String, ConditionExpression> waves = new HashMap<>();
         for (int i = 0; i < spec.conditions().size(); i++) {
             String text = spec.conditions().get(i).wave();
@@ -136,6 +142,10 @@ public final class FigureContent {
                 ? gfpScales(spec, study, out, t0, t1, axes.markMaps() ? marks : List.of()) : null;
         MapScales mapScales = allMaps.isEmpty() ? null : mapScales(spec.maps(), allMaps);
         return new FigureContent(spec, out, waveScales, gfpScales, mapScales);
+    }
+
+    private static Set<String> excluded(FigureSpec spec) {
+        return Set.copyOf(spec.excludedParticipants());
     }
 
     private static String where(FigureSpec spec, int panelIndex) {
@@ -233,7 +243,7 @@ public final class FigureContent {
         List<String> field = SpanAnalysis.fieldChannels(study);
         List<WaveTrace> traces = new ArrayList<>();
         for (ShownCondition c : picked(spec, panel.conditions())) {
-            Waveforms average = GrandAverage.of(study, waves.get(c.wave()), GrandAverage.Weighting.UNWEIGHTED, Set.of())
+            Waveforms average = GrandAverage.of(study, waves.get(c.wave()), GrandAverage.Weighting.UNWEIGHTED, excluded(spec))
                     .select(field);
             double[] map = new double[average.channelCount()];
             double[] gfp = new double[times.length];
@@ -286,14 +296,14 @@ public final class FigureContent {
         ConfidenceBand[] out = new ConfidenceBand[shown.size()];
         if (spec.intervals().kind() == IntervalKind.WITHIN_PARTICIPANTS && plain.size() >= 2) {
             List<ConditionWave> together = plain.stream().map(atRegion::get).toList();
-            List<ConfidenceBand> within = ConfidenceBand.withinParticipants(study, together, level, Set.of());
+            List<ConfidenceBand> within = ConfidenceBand.withinParticipants(study, together, level, excluded(spec));
             for (int j = 0; j < plain.size(); j++) {
                 out[plain.get(j)] = within.get(j);
             }
         }
         for (int k = 0; k < out.length; k++) {
             if (out[k] == null) {
-                out[k] = ConfidenceBand.acrossParticipants(study, atRegion.get(k), level, Set.of());
+                out[k] = ConfidenceBand.acrossParticipants(study, atRegion.get(k), level, excluded(spec));
             }
         }
         return List.of(out);
@@ -329,7 +339,7 @@ public final class FigureContent {
         MapMaker maker = makers.computeIfAbsent(List.of(settings.quantity(), settings.extent(), settings.resolution()),
                 k -> MapMaker.of(study.montage(), SplineParameters.defaults(), settings.quantity().quantity(),
                         MapExtent.parse(settings.extent()), settings.resolution()));
-        Waveforms average = GrandAverage.of(study, wave, GrandAverage.Weighting.UNWEIGHTED, Set.of());
+        Waveforms average = GrandAverage.of(study, wave, GrandAverage.Weighting.UNWEIGHTED, excluded(spec));
         List<ScalpMap> maps;
         try {
             maps = maker.maps(average, moments);

@@ -119,6 +119,23 @@ class FigureContentTest {
     }
 
     @Test
+    void excludedParticipantsAreLeftOutOfAveragesAndBands() {
+        Study s = DemoFigures.study();
+        String json = WAVES_ONLY.formatted(DemoFigures.STUDY, "across-participants")
+                .replace("\"intervals\"", "\"excluded_participants\": [\"p01\", \"p02\"], \"intervals\"");
+        FigureContent content = FigureContent.of(SpecFiles.parse(json, "x.json"), s);
+        WaveTrace trace = ((PanelContent.Waveforms) content.panels().get(0)).traces().get(1);
+        int sample = s.axis().nearestIndex(400);
+        int k = (int) Math.round((400 - trace.timesMs()[0]) / s.axis().stepMs());
+        double[] all = regionMeans(p -> s.waveforms(p, s.conditionIndex("rare")), sample);
+        double[] kept = java.util.Arrays.copyOfRange(all, 2, all.length);
+        assertThat(trace.mean()[k]).isCloseTo(new DescriptiveStatistics(kept).getMean(), within(1e-4));
+        assertThat(trace.upper()[k] - trace.mean()[k]).isCloseTo(tHalfWidth(kept), within(1e-4));
+        assertThatThrownBy(() -> FigureContent.of(SpecFiles.parse(json.replace("p02", "p99"), "x.json"), s))
+                .isInstanceOf(BadInputException.class).hasMessageContaining("p99");
+    }
+
+    @Test
     void withoutIntervalsNoBandIsDrawn() {
         PanelContent.Waveforms panel = (PanelContent.Waveforms) wavesAt("none").panels().get(0);
         assertThat(panel.traces()).noneMatch(WaveTrace::hasBand);

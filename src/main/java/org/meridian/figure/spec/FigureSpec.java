@@ -15,10 +15,11 @@ import org.meridian.core.BadInputException;
  *
  * @param version the spec format's version ({@value #VERSION})
  * @param letters whether panels get letters A, B, C … in reading order
+ * @param excludedParticipants participants left out of every average and interval
  */
 @JsonInclude(JsonInclude.Include.NON_NULL)
 @JsonPropertyOrder({"version", "study", "size", "font", "lines", "polarity", "letters", "conditions",
-    "intervals", "waveforms", "maps", "rows"})
+    "excluded_participants", "intervals", "waveforms", "maps", "rows"})
 public record FigureSpec(@JsonProperty("version") Integer version,
         @JsonProperty("study") String study,
         @JsonProperty("size") FigureSize size,
@@ -27,6 +28,7 @@ public record FigureSpec(@JsonProperty("version") Integer version,
         @JsonProperty("polarity") Polarity polarity,
         @JsonProperty("letters") Boolean letters,
         @JsonProperty("conditions") List<ShownCondition> conditions,
+        @JsonProperty("excluded_participants") List<String> excludedParticipants,
         @JsonProperty("intervals") IntervalSpec intervals,
         @JsonProperty("waveforms") WaveformAxes waveforms,
         @JsonProperty("maps") MapSettings maps,
@@ -47,6 +49,7 @@ public record FigureSpec(@JsonProperty("version") Integer version,
         polarity = polarity == null ? Polarity.POSITIVE_UP : polarity;
         letters = letters == null || letters;
         conditions = withDefaults(conditions);
+        excludedParticipants = excludedParticipants == null ? List.of() : List.copyOf(excludedParticipants);
         intervals = intervals == null ? IntervalSpec.defaults() : intervals;
         waveforms = waveforms == null ? WaveformAxes.defaults() : waveforms;
         maps = maps == null ? MapSettings.defaults() : maps;
@@ -59,8 +62,8 @@ public record FigureSpec(@JsonProperty("version") Integer version,
 
     /** The same figure with another study path (e.g. made relative to where the spec is saved). */
     public FigureSpec withStudy(String newStudy) {
-        return new FigureSpec(version, newStudy, size, font, lines, polarity, letters, conditions, intervals,
-                waveforms, maps, rows);
+        return new FigureSpec(version, newStudy, size, font, lines, polarity, letters, conditions,
+                excludedParticipants, intervals, waveforms, maps, rows);
     }
 
     /** Every panel in reading order. */
