@@ -26,6 +26,20 @@ record SpanData(String wave, MapQuantity quantity, SpanWindow window, List<Scalp
     /** The k-means restarts of the live segmentation (fewer than the command's, for speed). */
     static final int RESTARTS = 8;
 
+    /**
+     * The times of the strip's maps: {@code count} times evenly spaced from the window's start to
+     * its end (one map: the middle), each snapped to the nearest sample. The figure composer
+     * takes the same times, so a figure shows the strip the window shows.
+     */
+    static List<Double> stripTimes(org.meridian.core.TimeAxis axis, double startMs, double endMs, int count) {
+        List<Double> out = new ArrayList<>();
+        for (int i = 0; i < count; i++) {
+            double t = count == 1 ? (startMs + endMs) / 2 : startMs + i * (endMs - startMs) / (count - 1);
+            out.add(axis.timeMs(axis.nearestIndex(t)));
+        }
+        return out;
+    }
+
     static SpanData compute(StudySession session, Averages.WaveAverage wave, MapQuantity quantity,
             double startMs, double endMs, int mapCount, Tasks.TaskProgress progress) {
         Waveforms field = quantity == MapQuantity.CSD ? wave.csd()
@@ -36,10 +50,8 @@ record SpanData(String wave, MapQuantity quantity, SpanWindow window, List<Scalp
         if (session.hasMaps()) {
             MapMaker maker = session.maker(quantity.quantity(), StudySession.LIVE_RESOLUTION);
             List<MapMoment> moments = new ArrayList<>();
-            for (int i = 0; i < mapCount; i++) {
-                double t = mapCount == 1 ? (startMs + endMs) / 2
-                        : startMs + i * (endMs - startMs) / (mapCount - 1);
-                moments.add(MapMoment.at(field.axis().timeMs(field.axis().nearestIndex(t))));
+            for (double t : stripTimes(field.axis(), startMs, endMs, mapCount)) {
+                moments.add(MapMoment.at(t));
             }
             strip = maker.maps(wave.grand(), moments);
             for (ScalpMap m : strip) {

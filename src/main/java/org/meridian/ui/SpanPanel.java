@@ -31,7 +31,7 @@ import org.meridian.stats.Progress;
  * result is cleared as soon as what it was run on changes.
  */
 final class SpanPanel extends JPanel {
-    private static final int DEFAULT_MAPS = 6;
+    static final int DEFAULT_MAPS = 6;
 
     private final Workbench bench;
     private final JLabel scope = new JLabel(" ");
