@@ -4,7 +4,6 @@ import java.awt.BorderLayout;
 import java.awt.Color;
 import java.awt.Component;
 import java.awt.Container;
-import java.awt.FlowLayout;
 import java.awt.Window;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -83,7 +82,7 @@ final class FigureComposerDialog extends JDialog {
     }
 
     private JPanel choices() {
-        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        JPanel row = new JPanel(new WrapLayout(6, 2));
         width.setName("figure.width");
         channels.setName("figure.channels");
         channels.setToolTipText("Channels, each a waveform panel; join channels with + for a region (P3+Pz+P4)");
@@ -118,7 +117,7 @@ final class FigureComposerDialog extends JDialog {
     }
 
     private JPanel exportRow() {
-        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        JPanel row = new JPanel(new WrapLayout(6, 2));
         file.setName("figure.file");
         file.setToolTipText("The figure file: .svg, .pdf, .png or .tiff; its spec is saved beside it as .json");
         JButton browse = new JButton("Browse…");
@@ -193,19 +192,10 @@ final class FigureComposerDialog extends JDialog {
 
     /** Rebuilds the spec from the choices and computes the preview in the background. */
     void refresh() {
-        if (model.session() == null) {
-            say("Open a study first", true);
+        if (!rebuildSpec()) {
             return;
         }
         Study study = model.session().study();
-        try {
-            Path source = studyPath();
-            spec = FigureFromView.build(state, model, readChoices(), source == null ? study.name() : source.toString());
-        } catch (BadInputException e) {
-            spec = null;
-            say(e.getMessage(), true);
-            return;
-        }
         FigureSpec wanted = spec;
         say("Drawing…", false);
         model.tasks().submit("figure.preview", "Figure preview", p -> Figures.draw(wanted, study),
@@ -214,6 +204,24 @@ final class FigureComposerDialog extends JDialog {
                     say(String.format(Locale.ROOT, "%.0f × %.1f mm", drawing.widthMm(), drawing.heightMm()), false);
                 },
                 this::failed);
+    }
+
+    /** Makes the spec from the choices as they stand (typed text counts even before Enter). */
+    private boolean rebuildSpec() {
+        if (model.session() == null) {
+            say("Open a study first", true);
+            return false;
+        }
+        try {
+            Path source = studyPath();
+            spec = FigureFromView.build(state, model, readChoices(),
+                    source == null ? model.session().study().name() : source.toString());
+            return true;
+        } catch (BadInputException e) {
+            spec = null;
+            say(e.getMessage(), true);
+            return false;
+        }
     }
 
     private void browse() {
@@ -230,8 +238,7 @@ final class FigureComposerDialog extends JDialog {
     /** Exports the figure and its spec beside it, in the background. */
     void export() {
         Path study = studyPath();
-        if (spec == null || model.session() == null) {
-            say("Nothing to export yet", true);
+        if (!rebuildSpec()) {
             return;
         }
         if (study == null) {
