@@ -41,28 +41,45 @@ public final class SpanAnalysis {
      */
     public static SpanReport run(Study study, String condition, IntFunction<Waveforms> waveforms,
             SpanSettings settings, Progress progress) {
-        SurfaceLaplacian laplacian = settings.csd()
-                ? new SurfaceLaplacian(study.montage(), settings.spline()) : null;
-        List<String> channels = laplacian != null ? laplacian.spline().labels() : fieldChannels(study);
-        List<String> leftOut = new ArrayList<>(study.channelLabels());
-        leftOut.removeIf(l -> channels.stream().anyMatch(l::equalsIgnoreCase));
-        if (channels.size() < 3) {
-            throw new BadInputException(study.name() + ": a scalp map needs at least 3 channels, "
-                    + "the study has " + channels.size() + " with a position");
+        Fields fields = Fields.of(study, waveforms, settings, progress);
+        Description d = describe(study, fields, settings, progress);
+        int n = fields.perParticipant.length;
+        double[][] early = new double[n][];
+        double[][] late = new double[n][];
+        for (int p = 0; p < n; p++) {
+            double[][] parts = PartMeans.of(fields.perParticipant[p], d.window());
+            early[p] = parts[0];
+            late[p] = parts[1];
         }
+        SignFlipTest flips = SignFlipTest.withRandomPatterns(settings.permutations(), settings.seed());
+        SpanTest.Result test = SpanTest.run(early, late, flips, settings.alpha(), progress);
+        return new SpanReport(condition, settings, d.window(), d.grand().unit(), fields.channels,
+                fields.leftOut, study.participants(), d.trace(), d.segmentation(), test);
+    }
+
+    /**
+     * The descriptive part alone: the window, the grand average over the field's channels, the
+     * stability trace and the segmentation (k cross-validated on alternate halves of the
+     * participants), exactly as {@link #run} computes them. The span view shows this live.
+     */
+    public record Description(SpanWindow window, Waveforms grand, StabilityTrace trace,
+            Segmentation segmentation) {
+    }
+
+    /** Computes the {@link Description} of a condition over the settings' window. */
+    public static Description describe(Study study, IntFunction<Waveforms> waveforms,
+            SpanSettings settings, Progress progress) {
+        return describe(study, Fields.of(study, waveforms, settings, progress), settings, progress);
+    }
+
+    private static Description describe(Study study, Fields fields, SpanSettings settings,
+            Progress progress) {
         SpanWindow window = settings.splitMs().isPresent()
                 ? SpanWindow.splitAt(study.axis(), settings.window(), settings.splitMs().getAsDouble(),
                         "option --window", "option --split")
                 : SpanWindow.middle(study.axis(), settings.window(), "option --window");
         int reference = referenceSample(window, settings);
-
-        int n = study.participants().size();
-        Waveforms[] field = new Waveforms[n];
-        for (int p = 0; p < n; p++) {
-            progress.checkCancelled();
-            Waveforms w = waveforms.apply(p);
-            field[p] = laplacian != null ? laplacian.of(w) : w.select(channels);
-        }
+        Waveforms[] field = fields.perParticipant;
         Waveforms grand = GrandAverage.of(study, p -> field[p], GrandAverage.Weighting.UNWEIGHTED,
                 Set.of(), p -> -1);
         WindowMaps maps = new WindowMaps(grand, window);
@@ -70,24 +87,37 @@ public final class SpanAnalysis {
         progress.checkCancelled();
         WindowMaps halfA = null;
         WindowMaps halfB = null;
-        if (n >= 4) {
+        if (field.length >= 4) {
             halfA = new WindowMaps(half(study, field, 0), window);
             halfB = new WindowMaps(half(study, field, 1), window);
         }
         Segmentation segmentation = new TopographicClustering(settings.maxStates(),
                 settings.restarts(), settings.seed()).segment(maps, halfA, halfB);
+        return new Description(window, grand, trace, segmentation);
+    }
 
-        double[][] early = new double[n][];
-        double[][] late = new double[n][];
-        for (int p = 0; p < n; p++) {
-            double[][] parts = PartMeans.of(field[p], window);
-            early[p] = parts[0];
-            late[p] = parts[1];
+    /** Each participant's waves over the field's channels (potential or CSD). */
+    private record Fields(Waveforms[] perParticipant, List<String> channels, List<String> leftOut) {
+        static Fields of(Study study, IntFunction<Waveforms> waveforms, SpanSettings settings,
+                Progress progress) {
+            SurfaceLaplacian laplacian = settings.csd()
+                    ? new SurfaceLaplacian(study.montage(), settings.spline()) : null;
+            List<String> channels = laplacian != null ? laplacian.spline().labels() : fieldChannels(study);
+            List<String> leftOut = new ArrayList<>(study.channelLabels());
+            leftOut.removeIf(l -> channels.stream().anyMatch(l::equalsIgnoreCase));
+            if (channels.size() < 3) {
+                throw new BadInputException(study.name() + ": a scalp map needs at least 3 channels, "
+                        + "the study has " + channels.size() + " with a position");
+            }
+            int n = study.participants().size();
+            Waveforms[] field = new Waveforms[n];
+            for (int p = 0; p < n; p++) {
+                progress.checkCancelled();
+                Waveforms w = waveforms.apply(p);
+                field[p] = laplacian != null ? laplacian.of(w) : w.select(channels);
+            }
+            return new Fields(field, channels, leftOut);
         }
-        SignFlipTest flips = SignFlipTest.withRandomPatterns(settings.permutations(), settings.seed());
-        SpanTest.Result test = SpanTest.run(early, late, flips, settings.alpha(), progress);
-        return new SpanReport(condition, settings, window, grand.unit(), channels, leftOut,
-                study.participants(), trace, segmentation, test);
     }
 
     /**

@@ -2,17 +2,16 @@ package org.meridian.ui;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.maps.MapMaker;
 import org.meridian.maps.MapMoment;
 import org.meridian.maps.ScalpMap;
-import org.meridian.signal.TimeWindow;
 import org.meridian.span.Segmentation;
+import org.meridian.span.SpanAnalysis;
 import org.meridian.span.SpanSettings;
 import org.meridian.span.SpanWindow;
 import org.meridian.span.StabilityTrace;
-import org.meridian.span.TopographicClustering;
-import org.meridian.span.WindowMaps;
 
 /**
  * What the span view draws for one wave, window and quantity, computed off the event thread by
@@ -40,11 +39,13 @@ record SpanData(String wave, MapQuantity quantity, SpanWindow window, List<Scalp
         return out;
     }
 
-    static SpanData compute(StudySession session, Averages.WaveAverage wave, MapQuantity quantity,
-            double startMs, double endMs, int mapCount, Tasks.TaskProgress progress) {
+    /**
+     * @param included the study with only the participants the view includes
+     */
+    static SpanData compute(StudySession session, Study included, Averages.WaveAverage wave,
+            MapQuantity quantity, double startMs, double endMs, int mapCount, Tasks.TaskProgress progress) {
         Waveforms field = quantity == MapQuantity.CSD ? wave.csd()
                 : wave.grand().select(session.fieldChannels());
-        SpanWindow window = SpanWindow.middle(field.axis(), new TimeWindow(startMs, endMs), "window");
         List<ScalpMap> strip = new ArrayList<>();
         double maxAbs = 0;
         if (session.hasMaps()) {
@@ -59,11 +60,11 @@ record SpanData(String wave, MapQuantity quantity, SpanWindow window, List<Scalp
             }
         }
         progress.checkCancelled();
-        WindowMaps maps = new WindowMaps(field, window);
-        StabilityTrace trace = StabilityTrace.of(maps, -1);
-        progress.checkCancelled();
-        Segmentation segmentation = new TopographicClustering(SpanSettings.DEFAULT_MAX_STATES,
-                RESTARTS, SpanSettings.DEFAULT_SEED).segment(maps);
-        return new SpanData(wave.name(), quantity, window, strip, maxAbs, trace, segmentation);
+        SpanSettings settings = SpanSettings.window(startMs, endMs)
+                .withCsd(quantity == MapQuantity.CSD)
+                .withSegmentation(SpanSettings.DEFAULT_MAX_STATES, RESTARTS);
+        SpanAnalysis.Description d = SpanAnalysis.describe(included,
+                p -> wave.entry().wave().forParticipant(included, p), settings, SpanPanel.progressOf(progress));
+        return new SpanData(wave.name(), quantity, d.window(), strip, maxAbs, d.trace(), d.segmentation());
     }
 }

@@ -150,7 +150,8 @@ final class SpanPanel extends JPanel {
         double end = s.windowEndMs();
         int maps = (Integer) count.getValue();
         scope.setText(w.name() + "  ·  " + Texts.window(start, end) + "  ·  " + q.word());
-        bench.tasks().submit("span", "Span view", p -> SpanData.compute(session, w, q, start, end, maps, p),
+        Study study = included(session.study(), s.excludedParticipants());
+        bench.tasks().submit("span", "Span view", p -> SpanData.compute(session, study, w, q, start, end, maps, p),
                 d -> {
                     data = d;
                     strip.show(d);
@@ -218,7 +219,7 @@ final class SpanPanel extends JPanel {
                 t.verdict().word()));
     }
 
-    private static Progress progressOf(Tasks.TaskProgress p) {
+    static Progress progressOf(Tasks.TaskProgress p) {
         return new Progress() {
             @Override
             public void update(long done, long total) {

@@ -1,10 +1,8 @@
 package org.meridian.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
 import java.awt.Dimension;
-import java.awt.GraphicsEnvironment;
 import java.awt.Point;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -35,7 +33,7 @@ import org.meridian.figure.spec.WaveformPanel;
  * The figure composer as a researcher uses it: opened from the toolbar on the demo study, it
  * starts from the view, previews, and exports an SVG with its spec beside it — the same bytes the
  * {@code figure} command makes from that spec. Runs under AssertJ Swing's check that every Swing
- * access happens on the event thread; needs a display (Xvfb on CI), skipped without one.
+ * access happens on the event thread; needs a display (see {@link DisplayRequirement}).
  */
 class FigureComposerGuiTest {
     private static final Timeout WAIT = Timeout.timeout(60_000);
@@ -45,7 +43,7 @@ class FigureComposerGuiTest {
 
     @BeforeAll
     static void openTheDemo() {
-        assumeFalse(GraphicsEnvironment.isHeadless(), "needs a display");
+        DisplayRequirement.check();
         FailOnThreadViolationRepaintManager.install();
         robot = BasicRobot.robotWithNewAwtHierarchy();
         frame = GuiActionRunner.execute(() -> {

@@ -1,10 +1,8 @@
 package org.meridian.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
 import java.awt.Dimension;
-import java.awt.GraphicsEnvironment;
 import java.awt.Point;
 import java.awt.event.KeyEvent;
 import java.util.List;
@@ -44,7 +42,7 @@ class MainWindowGuiTest {
 
     @BeforeAll
     static void openTheDemo() {
-        assumeFalse(GraphicsEnvironment.isHeadless(), "needs a display");
+        DisplayRequirement.check();
         FailOnThreadViolationRepaintManager.install();
         robot = BasicRobot.robotWithNewAwtHierarchy();
         frame = GuiActionRunner.execute(() -> {
