@@ -169,11 +169,11 @@ class FigureContentTest {
     @Test
     void amplitudeStepsAreOneTwoOrFiveTimesAPowerOfTen() {
         // −6…8 in steps of 2 is 7 steps; −8…8 would be 8, so −6.5…7.5 takes steps of 5
-        assertThat(FigureContent.amplitudeStep(-5.5, 7)).isEqualTo(2);
-        assertThat(FigureContent.amplitudeStep(-6.5, 7.5)).isEqualTo(5);
-        assertThat(FigureContent.amplitudeStep(-3, 4)).isEqualTo(1);
-        assertThat(FigureContent.amplitudeStep(-0.3, 0.9)).isEqualTo(0.2);
-        assertThat(FigureContent.amplitudeStep(-20, 45)).isEqualTo(10);
+        assertThat(FigureScales.amplitudeStep(-5.5, 7)).isEqualTo(2);
+        assertThat(FigureScales.amplitudeStep(-6.5, 7.5)).isEqualTo(5);
+        assertThat(FigureScales.amplitudeStep(-3, 4)).isEqualTo(1);
+        assertThat(FigureScales.amplitudeStep(-0.3, 0.9)).isEqualTo(0.2);
+        assertThat(FigureScales.amplitudeStep(-20, 45)).isEqualTo(10);
     }
 
     private static String loadError(Path dir, String from, String to) throws Exception {
