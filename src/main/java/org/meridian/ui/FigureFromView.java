@@ -69,8 +69,12 @@ final class FigureFromView {
             rows.add(PanelRow.of(new SpanTracePanel(null, null, rows.isEmpty(), null)));
         }
         WaveEntry mapWave = model.entry(state.mapWave());
-        if (mapWave != null && !choices.mapTimesMs().isEmpty()) {
-            List<String> ringed = choices.channels().stream().filter(c -> !c.contains("+")).toList();
+        boolean mappable = model.session() != null && model.session().hasMaps();
+        if (mappable && mapWave != null && !choices.mapTimesMs().isEmpty()) {
+            List<String> positioned = model.session().study().montage().labels();
+            // ring the waveform channels that have a place on the head (regions and EOG channels have none)
+            List<String> ringed = choices.channels().stream()
+                    .filter(c -> positioned.stream().anyMatch(c::equalsIgnoreCase)).toList();
             rows.add(PanelRow.of(MapStripPanel.atTimes(waveText(mapWave), choices.mapTimesMs())
                     .withHighlight(ringed), ColourBarPanel.standard()));
         }
