@@ -26,6 +26,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meridian.figure.Figures;
 import org.meridian.figure.spec.FigureSpec;
+import org.meridian.figure.spec.Polarity;
 import org.meridian.figure.spec.SpecFiles;
 import org.meridian.figure.spec.WaveformPanel;
 
@@ -83,7 +84,12 @@ class FigureComposerGuiTest {
 
     @Test
     void composesFromTheViewPreviewsAndExportsAnSvgWithItsSpecBesideIt(@TempDir Path dir) throws Exception {
-        GuiActionRunner.execute(() -> frame.workbench().state().setSelectedChannels(List.of("FCz", "Pz")));
+        GuiActionRunner.execute(() -> {
+            ViewState s = frame.workbench().state();
+            s.setSelectedChannels(List.of("FCz", "Pz"));
+            s.setPolarity(PolarityConvention.NEGATIVE_UP);
+            s.setColourRange(ColourRange.locked(4));
+        });
         window.button("toolbar.figure").requireEnabled().click();
         DialogFixture composer = WindowFinder.findDialog(FigureComposerDialog.class).withTimeout(10_000).using(robot);
         // starts from the view: its channels and the span view's six map times across 280–400 ms
@@ -108,7 +114,16 @@ class FigureComposerGuiTest {
                 .toAbsolutePath().normalize());
         assertThat(saved.panels()).filteredOn(p -> p instanceof WaveformPanel).extracting(p -> ((WaveformPanel) p).channels())
                 .containsExactly("FCz", "Pz");
+        // what you see is what you export: waves, their colours and dashes, polarity, colour limits
         assertThat(saved.conditions()).extracting(c -> c.wave()).containsExactly("frequent", "rare", "rare - frequent");
+        List<WaveEntry> shown = read(() -> frame.workbench().model().shownEntries());
+        for (int i = 0; i < shown.size(); i++) {
+            int rgb = Theme.LIGHT.wave(shown.get(i).colourIndex()).getRGB() & 0xffffff;
+            assertThat(saved.conditions().get(i).colour()).isEqualTo(String.format("#%06X", rgb));
+            assertThat(saved.conditions().get(i).dashed()).isEqualTo(shown.get(i).contrast());
+        }
+        assertThat(saved.polarity()).isEqualTo(Polarity.NEGATIVE_UP);
+        assertThat(saved.maps().limit()).isEqualTo(4.0);
         // what the window exported is what the figure command makes from the saved spec
         assertThat(Files.readString(svg, StandardCharsets.UTF_8)).isEqualTo(Figures.svg(Figures.load(spec)));
         composer.close();
