@@ -78,7 +78,10 @@ final class FigureFromView {
             rows.add(PanelRow.of(MapStripPanel.atTimes(waveText(mapWave), choices.mapTimesMs())
                     .withHighlight(ringed), ColourBarPanel.standard()));
         }
-        MapQuantity quantity = state.quantity() == org.meridian.ui.MapQuantity.CSD ? MapQuantity.CSD : MapQuantity.POTENTIAL;
+        // as the span view: CSD where the study allows it, else the potential
+        boolean csd = state.quantity() == org.meridian.ui.MapQuantity.CSD && model.session() != null
+                && model.session().hasCsd();
+        MapQuantity quantity = csd ? MapQuantity.CSD : MapQuantity.POTENTIAL;
         MapSettings maps = new MapSettings(quantity, state.colourScale().name(), colourLimit(state, model), null,
                 null, null, null);
         return new FigureSpec(null, studyReference, new FigureSize(choices.width(), null), null, null,
