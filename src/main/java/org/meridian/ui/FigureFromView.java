@@ -82,7 +82,8 @@ final class FigureFromView {
         boolean csd = state.quantity() == org.meridian.ui.MapQuantity.CSD && model.session() != null
                 && model.session().hasCsd();
         MapQuantity quantity = csd ? MapQuantity.CSD : MapQuantity.POTENTIAL;
-        MapSettings maps = new MapSettings(quantity, state.colourScale().name(), colourLimit(state, model), null,
+        MapSettings maps = new MapSettings(quantity, state.colourScale().name(),
+                colourLimit(state, model, csd ? org.meridian.ui.MapQuantity.CSD : org.meridian.ui.MapQuantity.POTENTIAL), null,
                 null, null, null);
         return new FigureSpec(null, studyReference, new FigureSize(choices.width(), null), null, null,
                 state.polarity() == PolarityConvention.NEGATIVE_UP ? Polarity.NEGATIVE_UP : Polarity.POSITIVE_UP,
@@ -91,14 +92,14 @@ final class FigureFromView {
     }
 
     /** The limit the window's maps use: locked, or the map wave's largest value (auto); null = the strip's own. */
-    private static Double colourLimit(ViewState state, ViewModel model) {
+    private static Double colourLimit(ViewState state, ViewModel model, org.meridian.ui.MapQuantity shown) {
         ColourRange range = state.colourRange();
         switch (range.mode()) {
             case LOCKED:
                 return range.limit();
             case AUTO:
                 Averages.WaveAverage w = model.averages().wave(state.mapWave());
-                double max = w == null ? Double.NaN : w.maxAbs(state.quantity());
+                double max = w == null ? Double.NaN : w.maxAbs(shown);
                 return Double.isFinite(max) && max > 0 ? ColourLimits.automatic(max).upper() : null;
             default:
                 return null;
