@@ -77,7 +77,7 @@ public enum ExportFormat {
         switch (this) {
             case SVG -> SvgExport.write(drawing, file, widthMm, heightMm);
             case PDF -> PdfExport.write(drawing, file, widthMm, heightMm);
-            case PNG, TIFF -> RasterExport.write(drawing, file, widthMm, heightMm, requireDpi(dpi, "--dpi"), this);
+            case PNG, TIFF -> RasterExport.write(drawing, file, widthMm, heightMm, requireDpi(dpi, "option --dpi"), this);
             default -> throw new AssertionError(this);
         }
     }

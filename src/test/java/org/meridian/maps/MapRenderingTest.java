@@ -1,7 +1,5 @@
 package org.meridian.maps;
 
-import org.meridian.figure.ExportFormat;
-
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
@@ -19,6 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Montage;
 import org.meridian.core.Unit;
+import org.meridian.figure.ExportFormat;
 import org.meridian.montage.StandardSystem;
 import org.meridian.spline.Quantity;
 import org.meridian.spline.SplineParameters;
