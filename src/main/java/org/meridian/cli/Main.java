@@ -17,16 +17,16 @@ import picocli.CommandLine.Option;
         description = "Grand averages, difference waves, scalp maps, span stability and "
                 + "measures for averaged ERPs.",
         subcommands = {
-            MontageCommand.class,
-            InfoCommand.class,
-            SimulateCommand.class,
             ViewCommand.class,
-            CsdCommand.class,
-            RepairCommand.class,
-            MapsCommand.class,
+            InfoCommand.class,
             MeasureCommand.class,
             SpanCommand.class,
+            MapsCommand.class,
             FigureCommand.class,
+            CsdCommand.class,
+            RepairCommand.class,
+            SimulateCommand.class,
+            MontageCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;
