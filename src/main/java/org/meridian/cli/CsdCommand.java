@@ -4,8 +4,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.meridian.core.Study;
-import org.meridian.io.StudyLoader;
-import org.meridian.io.StudyWriter;
 import org.meridian.spline.SplineParameters;
 import org.meridian.spline.SurfaceLaplacian;
 import picocli.CommandLine.Command;
@@ -27,15 +25,8 @@ final class CsdCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "STUDY", description = "A manifest, its folder, a waveform file or a long table.")
     Path study;
 
-    @Option(names = {"-o", "--output"}, required = true, paramLabel = "DIR", description = "The new study folder.")
-    Path output;
-
-    @Option(names = "--force", description = "Replace the output folder if it exists and is not empty.")
-    boolean force;
-
-    @Option(names = "--decimals", paramLabel = "N", defaultValue = "4",
-            description = "Digits after the decimal point of every written value (default ${DEFAULT-VALUE}).")
-    int decimals;
+    @Mixin
+    StudyOutputOptions target;
 
     @Mixin
     SplineOptions spline;
@@ -43,12 +34,11 @@ final class CsdCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SplineParameters parameters = spline.parameters();
-        StudyWriter.requireApartFromInput(study, output);
-        Study in = StudyLoader.load(study);
+        Study in = target.loadInput(study);
         Study csd = SurfaceLaplacian.of(in, parameters);
-        StudyWriter.write(csd, output, new StudyWriter.Options(false, decimals, force));
+        target.write(csd);
         PrintWriter out = spec.commandLine().getOut();
-        out.println("output: " + output);
+        out.println("output: " + target.output);
         out.println("waveforms: " + in.participants().size() * in.conditions().size());
         out.println("channels: " + csd.channelLabels().size());
         out.println("unit: " + csd.unit().symbol());

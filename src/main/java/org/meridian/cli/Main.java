@@ -17,13 +17,16 @@ import picocli.CommandLine.Option;
         description = "Grand averages, difference waves, scalp maps, span stability and "
                 + "measures for averaged ERPs.",
         subcommands = {
-            MontageCommand.class,
+            ViewCommand.class,
             InfoCommand.class,
-            SimulateCommand.class,
+            MeasureCommand.class,
+            SpanCommand.class,
+            MapsCommand.class,
+            FigureCommand.class,
             CsdCommand.class,
             RepairCommand.class,
-            MapsCommand.class,
-            MeasureCommand.class,
+            SimulateCommand.class,
+            MontageCommand.class,
         })
 public final class Main implements Runnable {
     public static final int EXIT_OK = 0;
@@ -36,8 +39,11 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        // no command: the window on the demo study, once the window exists
-        new CommandLine(this).usage(System.out);
+        try {
+            new ViewCommand().call();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     public static void main(String[] args) {

@@ -8,10 +8,10 @@ import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
+import org.meridian.figure.ExportFormat;
 import org.meridian.io.StudyLoader;
 import org.meridian.maps.ColourLimits;
 import org.meridian.maps.ColourScales;
-import org.meridian.maps.FigureFormat;
 import org.meridian.maps.MapExtent;
 import org.meridian.maps.MapMaker;
 import org.meridian.maps.MapMoment;
@@ -30,14 +30,12 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code maps STUDY --condition EXPR (--times T,… | --windows A:B,…) -o FILE}: a strip of scalp
- * maps of a condition's grand average with one shared colour bar, as SVG, PDF or PNG.
+ * maps of a condition's grand average with one shared colour bar, as SVG, PDF, PNG or TIFF.
  */
 @Command(name = "maps", mixinStandardHelpOptions = true,
         description = "Draw a strip of scalp maps (spherical-spline potential, or CSD with --csd) of a "
                 + "condition's grand average at given times or as window means, with one colour bar.")
 final class MapsCommand implements Callable<Integer> {
-    private static final double MM_PER_POINT = 25.4 / 72;
-
     @Spec
     CommandSpec spec;
 
@@ -88,14 +86,14 @@ final class MapsCommand implements Callable<Integer> {
             description = "Figure width in mm (default 85 for one or two maps, else 175).")
     Double widthMm;
 
-    @Option(names = "--dpi", paramLabel = "DPI", defaultValue = "300", description = "PNG resolution (default ${DEFAULT-VALUE}).")
+    @Option(names = "--dpi", paramLabel = "DPI", defaultValue = "300", description = "PNG/TIFF resolution (default ${DEFAULT-VALUE}).")
     int dpi;
 
     @Option(names = "--resolution", paramLabel = "PIXELS", defaultValue = "256",
             description = "Map grid pixels across each map (default ${DEFAULT-VALUE}).")
     int resolution;
 
-    @Option(names = {"-o", "--output"}, required = true, paramLabel = "FILE", description = "FILE.svg, FILE.pdf or FILE.png.")
+    @Option(names = {"-o", "--output"}, required = true, paramLabel = "FILE", description = "FILE.svg, FILE.pdf, FILE.png or FILE.tiff.")
     Path output;
 
     @Mixin
@@ -103,7 +101,7 @@ final class MapsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        FigureFormat format = FigureFormat.of(output);
+        ExportFormat format = ExportFormat.of(output);
         if (resolution < 16 || resolution > 2048) {
             throw new BadInputException("option --resolution: must be from 16 to 2048, got " + resolution);
         }
@@ -120,7 +118,7 @@ final class MapsCommand implements Callable<Integer> {
         List<ScalpMap> maps = maker.maps(average, when);
         MapStrip strip = limits == null ? MapStrip.withAutomaticLimits(maps, style) : new MapStrip(maps, limits, style);
         double width = widthMm != null ? widthMm : (maps.size() <= 2 ? 85 : 175);
-        format.write(strip, output, width / MM_PER_POINT, dpi);
+        format.write(strip, output, width, dpi);
 
         PrintWriter out = spec.commandLine().getOut();
         out.println("output: " + output);

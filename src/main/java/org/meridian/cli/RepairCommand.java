@@ -5,8 +5,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.meridian.core.Study;
-import org.meridian.io.StudyLoader;
-import org.meridian.io.StudyWriter;
 import org.meridian.spline.ChannelRepair;
 import org.meridian.spline.SplineParameters;
 import picocli.CommandLine.Command;
@@ -31,15 +29,8 @@ final class RepairCommand implements Callable<Integer> {
             description = "The channels to repair, comma-separated (e.g. T7,P8).")
     List<String> channels;
 
-    @Option(names = {"-o", "--output"}, required = true, paramLabel = "DIR", description = "The new study folder.")
-    Path output;
-
-    @Option(names = "--force", description = "Replace the output folder if it exists and is not empty.")
-    boolean force;
-
-    @Option(names = "--decimals", paramLabel = "N", defaultValue = "4",
-            description = "Digits after the decimal point of every written value (default ${DEFAULT-VALUE}).")
-    int decimals;
+    @Mixin
+    StudyOutputOptions target;
 
     @Mixin
     SplineOptions spline;
@@ -47,13 +38,12 @@ final class RepairCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SplineParameters parameters = spline.parameters();
-        StudyWriter.requireApartFromInput(study, output);
-        Study in = StudyLoader.load(study);
+        Study in = target.loadInput(study);
         ChannelRepair repair = ChannelRepair.forStudy(in, channels, parameters);
         Study repaired = repair.of(in);
-        StudyWriter.write(repaired, output, new StudyWriter.Options(false, decimals, force));
+        target.write(repaired);
         PrintWriter out = spec.commandLine().getOut();
-        out.println("output: " + output);
+        out.println("output: " + target.output);
         out.println("repaired: " + String.join(", ", repair.repairedChannels()));
         out.println("from: " + repair.sourceChannelCount() + " positioned channels");
         out.println("waveforms: " + in.participants().size() * in.conditions().size());

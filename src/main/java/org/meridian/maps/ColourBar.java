@@ -6,6 +6,7 @@ import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
+import java.awt.geom.AffineTransform;
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
@@ -21,16 +22,27 @@ public final class ColourBar {
     private ColourBar() {
     }
 
+    /** Draws the bar with a font and line width that follow the bounds' height. */
     public static void draw(Graphics2D target, Rectangle2D bounds, ColourScale scale, ColourLimits limits,
             String unitLabel, double sizeFactor) {
+        float fontSize = (float) Math.max(5, bounds.getHeight() * 0.055 * sizeFactor);
+        draw(target, bounds, scale, limits, unitLabel, new Font(Font.SANS_SERIF, Font.PLAIN, 1).deriveFont(fontSize),
+                (float) Math.max(0.4, fontSize * 0.07));
+    }
+
+    /**
+     * Draws the bar with a given font (tick values and unit) and line width (outline and ticks),
+     * for figures whose type sizes are fixed in points. The bar is at most 1.3 font sizes wide.
+     */
+    public static void draw(Graphics2D target, Rectangle2D bounds, ColourScale scale, ColourLimits limits,
+            String unitLabel, Font font, float lineWidth) {
         Graphics2D g = (Graphics2D) target.create();
         try {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_BILINEAR);
-            double h = bounds.getHeight();
-            float fontSize = (float) Math.max(5, h * 0.055 * sizeFactor);
-            g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 1).deriveFont(fontSize));
+            float fontSize = font.getSize2D();
+            g.setFont(font);
             FontMetrics fm = g.getFontMetrics();
             double top = bounds.getY() + fm.getHeight() * 1.6;
             double bottom = bounds.getMaxY() - fm.getHeight() * 0.8;
@@ -43,11 +55,11 @@ public final class ColourBar {
             for (int i = 0; i < steps; i++) {
                 ramp.setRGB(0, steps - 1 - i, scale.rgb(i / (steps - 1.0)));
             }
-            g.drawImage(ramp, (int) Math.round(bar.getX()), (int) Math.round(bar.getY()),
-                    (int) Math.round(bar.getWidth()), (int) Math.round(bar.getHeight()), null);
-            float line = (float) Math.max(0.4, fontSize * 0.07);
+            AffineTransform place = AffineTransform.getTranslateInstance(bar.getX(), bar.getY());
+            place.scale(bar.getWidth(), bar.getHeight() / steps);
+            g.drawImage(ramp, place, null);
             g.setColor(INK);
-            g.setStroke(new BasicStroke(line));
+            g.setStroke(new BasicStroke(lineWidth));
             g.draw(bar);
             for (double tick : limits.ticks()) {
                 double y = bar.getMaxY() - limits.position(tick) * bar.getHeight();

@@ -92,7 +92,7 @@ class MapsCommandTest {
         CliRun window = CliRun.of("maps", study.toString(), "--condition", "rare", "--windows", "10", "-o", out);
         assertThat(window.err().strip()).isEqualTo("error: option --windows: \"10\" is not START:END in ms");
         CliRun gif = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "0", "-o", dir.resolve("x.gif").toString());
-        assertThat(gif.err().strip()).endsWith("x.gif: the figure must be a .svg, .pdf or .png file");
+        assertThat(gif.err().strip()).endsWith("x.gif: the figure must be a .svg, .pdf, .png or .tiff file");
         CliRun scale = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "0", "--scale", "wide", "-o", out);
         assertThat(scale.err().strip()).isEqualTo("error: colour scale limit \"wide\" is not auto or ±X (e.g. ±5)");
         assertThat(Files.exists(dir.resolve("x.png"))).isFalse();

@@ -17,6 +17,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Montage;
 import org.meridian.core.Unit;
+import org.meridian.figure.ExportFormat;
 import org.meridian.montage.StandardSystem;
 import org.meridian.spline.Quantity;
 import org.meridian.spline.SplineParameters;
@@ -30,7 +31,7 @@ class MapRenderingTest {
         MapStrip strip = new MapStrip(List.of(map), ColourLimits.symmetric(10), MapStyle.defaults().withContours(false)
                 .withMarkers(false));
         double widthPt = 300;
-        FigureFormat.PNG.write(strip, file, widthPt, dpi);
+        ExportFormat.PNG.write(strip, file, widthPt / ExportFormat.PT_PER_MM, dpi);
         BufferedImage image = ImageIO.read(file.toFile());
         // reproduce the strip's layout to find the map's square (side s, title band 0.16 s above it)
         double heightPt = widthPt / strip.aspectRatio();
@@ -88,18 +89,18 @@ class MapRenderingTest {
         ScalpMap map = maker.map(TestFields.dipolar(10, 0, 1, 0).on(TEN_TEN), Unit.MICROVOLT, "300 ms");
         MapStrip strip = MapStrip.withAutomaticLimits(List.of(map, map), MapStyle.defaults().withLabels(true));
         Path svg = dir.resolve("maps.svg");
-        FigureFormat.of(svg).write(strip, svg, 400, 150);
+        ExportFormat.of(svg).write(strip, svg, 400 / ExportFormat.PT_PER_MM, 150);
         String text = Files.readString(svg, StandardCharsets.UTF_8);
         assertThat(text).startsWith("<?xml").contains("<svg").contains("CSD (µV/m²)").contains("300 ms");
         Path pdf = dir.resolve("maps.pdf");
-        FigureFormat.of(pdf).write(strip, pdf, 400, 150);
+        ExportFormat.of(pdf).write(strip, pdf, 400 / ExportFormat.PT_PER_MM, 150);
         assertThat(new String(Files.readAllBytes(pdf), 0, 5, StandardCharsets.ISO_8859_1)).isEqualTo("%PDF-");
         try (var files = Files.list(dir)) {
             // written through AtomicFiles: no temporary file left behind
             assertThat(files.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("maps.svg", "maps.pdf");
         }
-        assertThatThrownBy(() -> FigureFormat.of(dir.resolve("maps.gif"))).isInstanceOf(BadInputException.class)
-                .hasMessageEndingWith("maps.gif: the figure must be a .svg, .pdf or .png file");
+        assertThatThrownBy(() -> ExportFormat.of(dir.resolve("maps.gif"))).isInstanceOf(BadInputException.class)
+                .hasMessageEndingWith("maps.gif: the figure must be a .svg, .pdf, .png or .tiff file");
     }
 
     @Test

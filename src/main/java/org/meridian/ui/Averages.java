@@ -1,0 +1,153 @@
+package org.meridian.ui;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.meridian.core.Waveforms;
+import org.meridian.signal.ConditionWave;
+import org.meridian.signal.ConfidenceBand;
+import org.meridian.signal.GrandAverage;
+import org.meridian.span.FieldStatistics;
+
+/**
+ * The derived data of the shown waves for one set of included participants, computed once off
+ * the event thread and then only read: each wave's grand average, its interval band, the CSD of
+ * the grand average at the electrodes, the GFP over the scalp field, and the largest absolute
+ * value at the field's electrodes over all samples (for the automatic colour range: the map
+ * interpolates between electrodes, so its values stay close to theirs, and any value beyond the
+ * limits takes the end colour). Immutable.
+ */
+public final class Averages {
+    /** The derived data of one wave. */
+    public record WaveAverage(WaveEntry entry, Waveforms grand, ConfidenceBand band, Waveforms csd,
+            double[] gfp, double[] csdGfp, double maxAbs, double csdMaxAbs) {
+        public String name() {
+            return entry.name();
+        }
+
+        /** The grand average of the field's channels in a quantity: potential or CSD. */
+        public Waveforms field(MapQuantity q) {
+            return q == MapQuantity.CSD && csd != null ? csd : grand;
+        }
+
+        public double[] gfp(MapQuantity q) {
+            return q == MapQuantity.CSD && csdGfp != null ? csdGfp : gfp;
+        }
+
+        /** The largest |value| at the field's electrodes over all samples in a quantity. */
+        public double maxAbs(MapQuantity q) {
+            return q == MapQuantity.CSD ? csdMaxAbs : maxAbs;
+        }
+    }
+
+    private final Set<String> excluded;
+    private final IntervalKind intervals;
+    private final Map<String, WaveAverage> waves;
+
+    private Averages(Set<String> excluded, IntervalKind intervals, Map<String, WaveAverage> waves) {
+        this.excluded = Set.copyOf(excluded);
+        this.intervals = intervals;
+        this.waves = Collections.unmodifiableMap(waves);
+    }
+
+    /** Nothing computed yet. */
+    public static Averages empty() {
+        return new Averages(Set.of(), IntervalKind.NONE, new LinkedHashMap<>());
+    }
+
+    /**
+     * Computes the grand averages of the given waves with the participants in {@code excluded}
+     * left out. Within-participant bands are formed over the shown loaded conditions together
+     * (when there are at least two); contrasts get their own t-interval.
+     */
+    public static Averages compute(StudySession session, List<WaveEntry> shown, Set<String> excluded,
+            IntervalKind intervals, Tasks.TaskProgress progress) {
+        Map<String, ConfidenceBand> bands = bands(session, shown, excluded, intervals);
+        Map<String, WaveAverage> out = new LinkedHashMap<>();
+        int done = 0;
+        for (WaveEntry e : shown) {
+            progress.checkCancelled();
+            Waveforms grand = GrandAverage.of(session.study(), e.wave(),
+                    GrandAverage.Weighting.UNWEIGHTED, excluded);
+            Waveforms field = grand.select(session.fieldChannels());
+            Waveforms csd = session.hasCsd() ? session.csdOf(grand) : null;
+            double potMax = maxAbs(field);
+            double csdMax = csd != null ? maxAbs(csd) : Double.NaN;
+            out.put(e.name(), new WaveAverage(e, grand, bands.get(e.name()), csd, gfp(field),
+                    csd == null ? null : gfp(csd), potMax, csdMax));
+            progress.update(++done, shown.size());
+        }
+        return new Averages(excluded, intervals, out);
+    }
+
+    public Set<String> excluded() {
+        return excluded;
+    }
+
+    public IntervalKind intervals() {
+        return intervals;
+    }
+
+    /** The wave of a name, or null when it is not computed (not shown). */
+    public WaveAverage wave(String name) {
+        return waves.get(name);
+    }
+
+    /** The computed waves, in legend order. */
+    public List<WaveAverage> waves() {
+        return new ArrayList<>(waves.values());
+    }
+
+    public boolean isEmpty() {
+        return waves.isEmpty();
+    }
+
+    private static Map<String, ConfidenceBand> bands(StudySession session, List<WaveEntry> shown,
+            Set<String> excluded, IntervalKind intervals) {
+        Map<String, ConfidenceBand> out = new LinkedHashMap<>();
+        int included = session.study().participants().size() - excluded.size();
+        if (intervals == IntervalKind.NONE || included < 2) {
+            return out;
+        }
+        List<ConditionWave> within = new ArrayList<>();
+        for (WaveEntry e : shown) {
+            if (!e.contrast()) {
+                within.add(e.wave());
+            }
+        }
+        if (intervals == IntervalKind.WITHIN && within.size() >= 2) {
+            for (ConfidenceBand b : ConfidenceBand.withinParticipants(session.study(), within,
+                    ConfidenceBand.DEFAULT_LEVEL, excluded)) {
+                out.put(b.name(), b);
+            }
+        }
+        for (WaveEntry e : shown) {
+            out.computeIfAbsent(e.name(), n -> ConfidenceBand.acrossParticipants(session.study(),
+                    e.wave(), ConfidenceBand.DEFAULT_LEVEL, excluded));
+        }
+        return out;
+    }
+
+    /** GFP (Lehmann &amp; Skrandies, 1980) of every sample over the given channels. */
+    private static double[] gfp(Waveforms field) {
+        int n = field.sampleCount();
+        double[] out = new double[n];
+        double[] map = new double[field.channelCount()];
+        for (int s = 0; s < n; s++) {
+            field.sampleInto(s, map);
+            out[s] = FieldStatistics.gfp(map);
+        }
+        return out;
+    }
+
+    private static double maxAbs(Waveforms w) {
+        double max = 0;
+        for (float v : w.copyValues()) {
+            max = Math.max(max, Math.abs(v));
+        }
+        return max;
+    }
+}

@@ -1,0 +1,330 @@
+package org.meridian.ui;
+
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.Toolkit;
+import java.awt.datatransfer.StringSelection;
+import java.awt.event.MouseEvent;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import javax.swing.BorderFactory;
+import javax.swing.JButton;
+import javax.swing.JCheckBox;
+import javax.swing.JComboBox;
+import javax.swing.JFileChooser;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTable;
+import javax.swing.table.JTableHeader;
+import org.meridian.core.Study;
+import org.meridian.core.Unit;
+import org.meridian.core.Waveforms;
+import org.meridian.io.AtomicFiles;
+import org.meridian.measure.Measure;
+import org.meridian.measure.MeasureRequest;
+import org.meridian.measure.MeasureSettings;
+import org.meridian.measure.MeasureTable;
+import org.meridian.measure.Measurement;
+import org.meridian.measure.Measures;
+import org.meridian.measure.Polarity;
+import org.meridian.signal.ConditionWave;
+import org.meridian.signal.GrandAverage;
+import org.meridian.signal.TimeWindow;
+
+/**
+ * The measures of DESIGN §6.3 for the time window and the selected channels, for every shown
+ * wave: the grand average's row first, each participant's on request. Sortable by any column;
+ * Copy puts the rows on screen on the clipboard as tab-separated text; Export writes the tidy
+ * table ({@link MeasureTable}, every participant and the grand average) through
+ * {@link AtomicFiles}. Recomputed in a background task whenever the window, channels, waves or
+ * participants change (a newer request cancels an older one).
+ */
+final class MeasuresPanel extends JPanel {
+    private final Workbench bench;
+    private final MeasureRows rows = new MeasureRows();
+    private final JTable table = new JTable(rows) {
+        @Override
+        protected JTableHeader createDefaultTableHeader() {
+            return new JTableHeader(columnModel) {
+                @Override
+                public String getToolTipText(MouseEvent e) {
+                    int c = columnAtPoint(e.getPoint());
+                    return c < 0 ? null : rows.description(convertColumnIndexToModel(c));
+                }
+            };
+        }
+    };
+    private final JLabel scope = new JLabel(" ");
+    private final JComboBox<Polarity> polarity = new JComboBox<>(new Polarity[] {Polarity.POSITIVE, Polarity.NEGATIVE});
+    private final JCheckBox participants = new JCheckBox("Participants");
+    private final JLabel warnings = new JLabel();
+    private Result last;
+
+    MeasuresPanel(Workbench bench) {
+        super(new BorderLayout());
+        this.bench = bench;
+        setName("measures");
+        setMinimumSize(new Dimension(220, 140));
+        JPanel header = new JPanel(new BorderLayout());
+        header.setBorder(BorderFactory.createEmptyBorder(2, 6, 2, 6));
+        JPanel top = new JPanel(new WrapLayout(4, 2));
+        JLabel title = new JLabel("Measures");
+        title.putClientProperty("FlatLaf.styleClass", "h4");
+        top.add(title);
+        polarity.setName("measures.polarity");
+        polarity.setToolTipText("Peaks and areas of positive or of negative deflections");
+        polarity.setRenderer(new javax.swing.DefaultListCellRenderer() {
+            @Override
+            public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> l, Object v,
+                    int i, boolean s, boolean f) {
+                return super.getListCellRendererComponent(l, v == Polarity.NEGATIVE ? "negative" : "positive", i, s, f);
+            }
+        });
+        polarity.addActionListener(e -> recompute());
+        participants.setName("measures.participants");
+        participants.setToolTipText("Show each participant's row under the grand average's");
+        participants.addActionListener(e -> showTable(rows.table()));
+        JButton copy = new JButton("Copy");
+        copy.setName("measures.copy");
+        copy.setToolTipText("Copy the rows on screen as tab-separated text");
+        copy.addActionListener(e -> copy());
+        JButton export = new JButton("Export…");
+        export.setName("measures.export");
+        export.setToolTipText("Write the tidy measure table (every participant and the grand average) as TSV");
+        export.addActionListener(e -> exportTable());
+        top.add(polarity);
+        top.add(participants);
+        top.add(copy);
+        top.add(export);
+        header.add(top, BorderLayout.NORTH);
+        scope.setName("measures.scope");
+        warnings.setName("measures.warnings");
+        JPanel line = new JPanel(new BorderLayout(8, 0));
+        line.add(scope, BorderLayout.CENTER);
+        line.add(warnings, BorderLayout.EAST);
+        header.add(line, BorderLayout.SOUTH);
+        add(header, BorderLayout.NORTH);
+        table.setName("measures.table");
+        table.setAutoCreateRowSorter(true);
+        table.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
+        table.setFillsViewportHeight(true);
+        add(new JScrollPane(table), BorderLayout.CENTER);
+
+        bench.state().addListener((s, what) -> {
+            if (what.contains(ViewState.Aspect.WINDOW) || what.contains(ViewState.Aspect.CHANNELS)
+                    || what.contains(ViewState.Aspect.WAVES) || what.contains(ViewState.Aspect.PARTICIPANTS)) {
+                recompute();
+            } else if (what.contains(ViewState.Aspect.CURSOR)) {
+                followCursor();
+            }
+        });
+    }
+
+    JTable table() {
+        return table;
+    }
+
+    /** The text above the table: window and channels measured. */
+    String scopeText() {
+        return scope.getText();
+    }
+
+    private void recompute() {
+        StudySession session = bench.model().session();
+        ViewState s = bench.state();
+        if (session == null || s.shownWaves().isEmpty() || s.selectedChannels().isEmpty()) {
+            return;
+        }
+        TimeWindow window = new TimeWindow(s.windowStartMs(), s.windowEndMs());
+        MeasureRequest.Builder b = MeasureRequest.builder()
+                .window(window)
+                .settings(MeasureSettings.defaults().withPolarity((Polarity) polarity.getSelectedItem()))
+                .grand(true)
+                .excluded(s.excludedParticipants());
+        for (String name : s.shownWaves()) {
+            WaveEntry e = bench.model().entry(name);
+            if (e != null) {
+                b.condition(e.wave());
+            }
+        }
+        for (String c : s.selectedChannels()) {
+            b.channel(c);
+        }
+        List<Measure> measures = Measures.all();
+        for (Measure m : measures) {
+            b.measure(m);
+        }
+        MeasureRequest request = b.build();
+        Unit unit = session.study().unit();
+        List<String> units = new ArrayList<>();
+        for (Measure m : measures) {
+            units.add(m.unit(unit));
+        }
+        String channels = String.join(", ", s.selectedChannels());
+        String scopeText = Texts.window(s.windowStartMs(), s.windowEndMs()) + "  ·  " + channels;
+        bench.tasks().submit("measures", "Measures",
+                p -> new Result(Measurement.run(session.study(), request), series(session, request)),
+                result -> {
+                    last = result;
+                    rows.show(result.table(), measures, units, participants.isSelected(), result::seriesOf);
+                    scope.setText(scopeText);
+                    showWarnings(result.table());
+                    followCursor();
+                    sizeColumns();
+                }, bench::report);
+    }
+
+    /** A measure table and the wave behind each of its rows. */
+    private record Result(MeasureTable table, Map<String, float[]> series) {
+        float[] seriesOf(String participant, String condition, String channel) {
+            return series.get(key(participant, condition, channel));
+        }
+    }
+
+    private static String key(String participant, String condition, String channel) {
+        return participant + "\u0000" + condition + "\u0000" + channel.toLowerCase(java.util.Locale.ROOT);
+    }
+
+    /** Each row's wave (participants' and grand average's), for the value at the cursor. */
+    private static Map<String, float[]> series(StudySession session, MeasureRequest request) {
+        Map<String, float[]> out = new HashMap<>();
+        Study study = session.study();
+        for (ConditionWave wave : request.conditions()) {
+            Waveforms grand = GrandAverage.of(study, wave, request.weighting(), request.excluded());
+            for (String ch : request.channels()) {
+                int c = grand.indexOf(ch);
+                if (c >= 0) {
+                    out.put(key(MeasureTable.GRAND, wave.name(), ch), grand.channel(c));
+                }
+            }
+            for (int p = 0; p < study.participants().size(); p++) {
+                String name = study.participants().get(p);
+                if (GrandAverage.isExcluded(name, request.excluded())) {
+                    continue;
+                }
+                Waveforms w = wave.forParticipant(study, p);
+                for (String ch : request.channels()) {
+                    int c = w.indexOf(ch);
+                    if (c >= 0) {
+                        out.put(key(name, wave.name(), ch), w.channel(c));
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    private void followCursor() {
+        ViewState s = bench.state();
+        StudySession session = bench.model().session();
+        rows.cursor(s.cursorSample(), Texts.ms(s.cursorMs()),
+                session == null ? "µV" : session.study().unit().symbol());
+        table.repaint();
+    }
+
+    /** The title of the value-at-cursor column's tool tip, e.g. {@code At 352 ms}. */
+    String cursorText() {
+        return rows.cursorColumnName();
+    }
+
+    private void showTable(MeasureTable t) {
+        if (t != null && last != null) {
+            rows.show(t, Measures.all(), currentUnits(), participants.isSelected(), last::seriesOf);
+            sizeColumns();
+        }
+    }
+
+    private List<String> currentUnits() {
+        List<String> out = new ArrayList<>();
+        Unit unit = bench.model().session() == null ? Unit.MICROVOLT : bench.model().session().study().unit();
+        for (Measure m : Measures.all()) {
+            out.add(m.unit(unit));
+        }
+        return out;
+    }
+
+    private void showWarnings(MeasureTable t) {
+        if (t.warnings().isEmpty()) {
+            warnings.setText("");
+            warnings.setToolTipText(null);
+            return;
+        }
+        warnings.setText(t.warnings().size() + (t.warnings().size() == 1 ? " note" : " notes"));
+        StringBuilder sb = new StringBuilder("<html>");
+        t.warnings().stream().limit(20).forEach(w -> sb.append(escape(w.describe())).append("<br>"));
+        if (t.warnings().size() > 20) {
+            sb.append("… and ").append(t.warnings().size() - 20).append(" more");
+        }
+        warnings.setToolTipText(sb.append("</html>").toString());
+    }
+
+    private static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+    }
+
+    private void sizeColumns() {
+        java.awt.FontMetrics fm = table.getFontMetrics(table.getFont());
+        for (int c = 0; c < table.getColumnCount(); c++) {
+            int w = fm.stringWidth(table.getColumnName(c)) + 24;
+            for (int r = 0; r < Math.min(50, table.getRowCount()); r++) {
+                Object v = table.getValueAt(r, c);
+                w = Math.max(w, fm.stringWidth(String.valueOf(v)) + 16);
+            }
+            table.getColumnModel().getColumn(c).setPreferredWidth(w);
+        }
+    }
+
+    /**
+     * The rows on screen, in their sorted order, as tab-separated text with a header line; values
+     * in full precision with a plain minus, so a spreadsheet reads them as numbers.
+     */
+    String rowsAsTsv() {
+        StringBuilder sb = new StringBuilder();
+        for (int c = 0; c < table.getColumnCount(); c++) {
+            sb.append(c == 0 ? "" : "\t").append(table.getColumnName(c));
+        }
+        sb.append('\n');
+        for (int r = 0; r < table.getRowCount(); r++) {
+            for (int c = 0; c < table.getColumnCount(); c++) {
+                Object v = table.getValueAt(r, c);
+                String text = v == null ? ""
+                        : v instanceof MeasureRows.Value m ? MeasureTable.formatValue(m.value()) : v.toString();
+                sb.append(c == 0 ? "" : "\t").append(text);
+            }
+            sb.append('\n');
+        }
+        return sb.toString();
+    }
+
+    private void copy() {
+        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new StringSelection(rowsAsTsv()), null);
+        bench.message("copied " + table.getRowCount() + " rows of measures");
+    }
+
+    /** Asks where to write the tidy table and writes it in the background. */
+    void exportTable() {
+        MeasureTable t = rows.table();
+        if (t == null) {
+            bench.message("no measures to export yet");
+            return;
+        }
+        JFileChooser chooser = new JFileChooser();
+        chooser.setDialogTitle("Export the measure table (TSV)");
+        chooser.setSelectedFile(new java.io.File("measures.tsv"));
+        if (chooser.showSaveDialog(this) == JFileChooser.APPROVE_OPTION) {
+            export(chooser.getSelectedFile().toPath(), t);
+        }
+    }
+
+    /** Writes the tidy table to a file through {@link AtomicFiles}, off the event thread. */
+    void export(Path target, MeasureTable t) {
+        bench.tasks().submit("export", "Exporting measures", p -> {
+            AtomicFiles.writeString(target, t.toTsv());
+            return target;
+        }, done -> bench.message("wrote " + t.rows().size() + " measures to " + done), bench::report);
+    }
+}

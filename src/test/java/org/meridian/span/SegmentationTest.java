@@ -1,0 +1,139 @@
+package org.meridian.span;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
+import org.apache.commons.math3.stat.correlation.PearsonsCorrelation;
+import org.junit.jupiter.api.Test;
+import org.meridian.core.TimeAxis;
+import org.meridian.signal.TimeWindow;
+import org.meridian.core.Unit;
+import org.meridian.core.Waveforms;
+
+class SegmentationTest {
+    private static final TimeAxis AXIS = new TimeAxis(0, 500, 100);
+
+    /** Channels × samples: at sample t the map maps[t] (given per sample). */
+    static Waveforms waveforms(double[][] perSample) {
+        int n = perSample.length;
+        int c = perSample[0].length;
+        float[] v = new float[c * n];
+        List<String> labels = new ArrayList<>();
+        for (int ch = 0; ch < c; ch++) {
+            labels.add("E" + (ch + 1));
+            for (int t = 0; t < n; t++) {
+                v[ch * n + t] = (float) perSample[t][ch];
+            }
+        }
+        return new Waveforms(labels, new TimeAxis(0, 500, n), Unit.MICROVOLT, v);
+    }
+
+    /** Blocks of 25 samples alternating between maps a and b, each scaled by a smooth GFP hump. */
+    static double[][] alternating(double[] a, double[] b, double noise, long seed) {
+        SplittableRandom rnd = new SplittableRandom(seed);
+        double[][] out = new double[100][];
+        for (int t = 0; t < 100; t++) {
+            double[] m = (t / 25) % 2 == 0 ? a : b;
+            double strength = 2 + Math.sin(Math.PI * (t % 25 + 0.5) / 25);
+            out[t] = new double[m.length];
+            for (int c = 0; c < m.length; c++) {
+                out[t][c] = strength * m[c] + noise * FieldStatisticsTest.gaussian(rnd);
+            }
+        }
+        return out;
+    }
+
+    @Test
+    void kMeansRecoversTwoAlternatingMaps() {
+        SplittableRandom rnd = new SplittableRandom(12);
+        double[] a = FieldStatisticsTest.randomMap(rnd, 32, 0, 1);
+        double[] b = FieldStatisticsTest.randomMap(rnd, 32, 0, 1);
+        WindowMaps maps = new WindowMaps(waveforms(alternating(a, b, 0.3, 1)),
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
+        Segmentation s = new TopographicClustering(6, 10, 3).segment(maps);
+        // synthetic truth (common practice): four blocks A B A B of 25 samples, so two states
+        // and four segments at the block edges
+        assertThat(s.k()).isEqualTo(2);
+        assertThat(s.segments()).extracting(Segment::state).containsExactly(1, 2, 1, 2);
+        assertThat(s.segments()).extracting(Segment::first).containsExactly(0, 25, 50, 75);
+        assertThat(s.segments()).extracting(Segment::startMs).containsExactly(0.0, 50.0, 100.0, 150.0);
+        // the state maps are the true maps, normalised (Pearson r from Commons Math)
+        assertThat(new PearsonsCorrelation().correlation(s.stateMap(1), a)).isGreaterThan(0.99);
+        assertThat(new PearsonsCorrelation().correlation(s.stateMap(2), b)).isGreaterThan(0.99);
+        double[] cv = s.crossValidation();
+        assertThat(cv[1]).isLessThan(cv[0]).isLessThan(cv[2]);
+    }
+
+    @Test
+    void aMapAndItsInversionAreDifferentStates() {
+        SplittableRandom rnd = new SplittableRandom(5);
+        double[] a = FieldStatisticsTest.randomMap(rnd, 24, 0, 1);
+        double[] minusA = SpanTestTest.scaled(a, -1);
+        WindowMaps maps = new WindowMaps(waveforms(alternating(a, minusA, 0.2, 2)),
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
+        Segmentation s = new TopographicClustering(4, 5, 1).segment(maps);
+        // polarity-sensitive clustering: r(a, −a) = −1, so the inverted map is a second state
+        assertThat(s.k()).isEqualTo(2);
+        assertThat(s.segments()).hasSize(4);
+    }
+
+    @Test
+    void oneNoisyMapIsOneState() {
+        SplittableRandom rnd = new SplittableRandom(8);
+        double[] a = FieldStatisticsTest.randomMap(rnd, 32, 0, 1);
+        WindowMaps maps = new WindowMaps(waveforms(alternating(a, a, 0.3, 4)),
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
+        Segmentation s = new TopographicClustering(6, 10, 3).segment(maps);
+        // Pascual-Marqui et al. (1995): the CV penalty ((C−1)/(C−1−k))² rejects states that
+        // only split noise
+        assertThat(s.k()).isEqualTo(1);
+        assertThat(s.segments()).singleElement().satisfies(seg -> {
+            assertThat(seg.samples()).isEqualTo(100);
+        });
+        assertThat(s.meanCorrelation()).isGreaterThan(0.9);
+    }
+
+    @Test
+    void sameSeedGivesTheSameSegmentation() {
+        SplittableRandom rnd = new SplittableRandom(2);
+        double[] a = FieldStatisticsTest.randomMap(rnd, 16, 0, 1);
+        double[] b = FieldStatisticsTest.randomMap(rnd, 16, 0, 1);
+        WindowMaps maps = new WindowMaps(waveforms(alternating(a, b, 1.5, 9)),
+                SpanWindow.middle(AXIS, new TimeWindow(0, 198), "--window"));
+        Segmentation s1 = new TopographicClustering(5, 4, 77).segment(maps);
+        Segmentation s2 = new TopographicClustering(5, 4, 77).segment(maps);
+        assertThat(s2.segments()).isEqualTo(s1.segments());
+        assertThat(s2.crossValidation()).containsExactly(s1.crossValidation());
+    }
+
+    @Test
+    void traceComparesEachSampleWithTheMapAtTheGfpMaximum() {
+        SplittableRandom rnd = new SplittableRandom(3);
+        double[] a = FieldStatisticsTest.randomMap(rnd, 20, 0, 1);
+        double[] b = FieldStatisticsTest.randomMap(rnd, 20, 0, 1);
+        double[][] data = alternating(a, b, 0.5, 5);
+        WindowMaps maps = new WindowMaps(waveforms(data), SpanWindow.middle(AXIS, new TimeWindow(20, 180), "--window"));
+        StabilityTrace trace = StabilityTrace.of(maps, -1);
+        int ref = trace.referenceSample();
+        for (int t = 0; t < trace.size(); t++) {
+            assertThat(trace.gfp(t)).isLessThanOrEqualTo(trace.gfp(ref));
+        }
+        assertThat(trace.correlation(ref)).isCloseTo(1.0, within(1e-12));
+        assertThat(trace.diss(ref)).isCloseTo(0.0, within(1e-6));
+        double[] refMap = maps.map(ref);
+        for (int t = 0; t < trace.size(); t += 7) {
+            // Pearson correlation of the two maps, from Commons Math; DISS = sqrt(2(1 − r))
+            double r = new PearsonsCorrelation().correlation(maps.map(t), refMap);
+            assertThat(trace.correlation(t)).isCloseTo(r, within(1e-12));
+            assertThat(trace.diss(t)).isCloseTo(Math.sqrt(2 * (1 - r)), within(1e-9));
+            assertThat(trace.correlation(t, ref)).isEqualTo(trace.correlation(ref, t));
+            assertThat(trace.correlation(t, t)).isCloseTo(1.0, within(1e-12));
+        }
+        assertThat(trace.timeMs(0)).isEqualTo(20.0);
+        StabilityTrace chosen = StabilityTrace.of(maps, 3);
+        assertThat(chosen.referenceMs()).isEqualTo(26.0);
+    }
+}

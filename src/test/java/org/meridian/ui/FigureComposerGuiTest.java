@@ -1,0 +1,131 @@
+package org.meridian.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.Dimension;
+import java.awt.Point;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.OptionalDouble;
+import java.util.function.Supplier;
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.assertj.swing.finder.WindowFinder;
+import org.assertj.swing.fixture.DialogFixture;
+import org.assertj.swing.fixture.FrameFixture;
+import org.assertj.swing.timing.Condition;
+import org.assertj.swing.timing.Pause;
+import org.assertj.swing.timing.Timeout;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.meridian.figure.Figures;
+import org.meridian.figure.spec.FigureSpec;
+import org.meridian.figure.spec.Polarity;
+import org.meridian.figure.spec.SpecFiles;
+import org.meridian.figure.spec.WaveformPanel;
+
+/**
+ * The figure composer as a researcher uses it: opened from the toolbar on the demo study, it
+ * starts from the view, previews, and exports an SVG with its spec beside it — the same bytes the
+ * {@code figure} command makes from that spec. Runs under AssertJ Swing's check that every Swing
+ * access happens on the event thread; needs a display (see {@link DisplayRequirement}).
+ */
+class FigureComposerGuiTest {
+    private static final Timeout WAIT = Timeout.timeout(60_000);
+    private static Robot robot;
+    private static FrameFixture window;
+    private static MainWindow frame;
+
+    @BeforeAll
+    static void openTheDemo() {
+        DisplayRequirement.check();
+        FailOnThreadViolationRepaintManager.install();
+        robot = BasicRobot.robotWithNewAwtHierarchy();
+        frame = GuiActionRunner.execute(() -> {
+            Theme.LIGHT.install();
+            return new MainWindow(UiPrefs.inMemory());
+        });
+        window = new FrameFixture(robot, frame);
+        window.show(new Dimension(1400, 900));
+        window.moveTo(new Point(0, 0));
+        GuiActionRunner.execute(() -> frame.openDemo(new ViewOptions(OptionalDouble.of(280),
+                OptionalDouble.of(400), OptionalDouble.of(340), "Pz", List.of(), "")));
+        waitFor("the demo study to open", () -> frame.workbench().model().session() != null
+                && !frame.workbench().tasks().isRunning("open"));
+        waitFor("the averages", () -> !frame.workbench().model().averages().isEmpty()
+                && !frame.workbench().tasks().isRunning("averages"));
+    }
+
+    @AfterAll
+    static void close() {
+        if (window != null) {
+            window.cleanUp();
+        }
+    }
+
+    private static <T> T read(Supplier<T> s) {
+        return GuiActionRunner.execute(s::get);
+    }
+
+    private static void waitFor(String what, Supplier<Boolean> c) {
+        Pause.pause(new Condition(what) {
+            @Override
+            public boolean test() {
+                return GuiActionRunner.execute(c::get);
+            }
+        }, WAIT);
+    }
+
+    @Test
+    void composesFromTheViewPreviewsAndExportsAnSvgWithItsSpecBesideIt(@TempDir Path dir) throws Exception {
+        GuiActionRunner.execute(() -> {
+            ViewState s = frame.workbench().state();
+            s.setSelectedChannels(List.of("FCz", "Pz"));
+            s.setPolarity(PolarityConvention.NEGATIVE_UP);
+            s.setColourRange(ColourRange.locked(4));
+        });
+        window.button("toolbar.figure").requireEnabled().click();
+        DialogFixture composer = WindowFinder.findDialog(FigureComposerDialog.class).withTimeout(10_000).using(robot);
+        // starts from the view: its channels and the span view's six map times across 280–400 ms
+        composer.textBox("figure.channels").requireText("FCz, Pz");
+        composer.textBox("figure.times").requireText("280, 304, 328, 352, 376, 400");
+        FigureComposerDialog dialog = (FigureComposerDialog) composer.target();
+        waitFor("the preview", () -> dialog.preview().figure() != null
+                && !frame.workbench().tasks().isRunning("figure.preview"));
+        assertThat(read(() -> dialog.preview().figure().widthMm())).isEqualTo(175);
+        assertThat(read(() -> dialog.preview().getPreferredSize().width)).isPositive();
+
+        Path svg = dir.resolve("late peak.svg");
+        composer.textBox("figure.file").setText(svg.toString());
+        composer.button("figure.export").click();
+        Path spec = dir.resolve("late peak.json");
+        waitFor("the export", () -> Files.exists(spec) && !frame.workbench().tasks().isRunning("figure.export"));
+        composer.label("figure.status").requireText("Saved late peak.svg (SVG) and late peak.json");
+
+        FigureSpec saved = SpecFiles.read(spec);
+        // the spec names the study relative to itself, so figure and spec can move together
+        assertThat(Figures.studyPath(saved, spec)).isEqualTo(Path.of("samples", "two-tone-listening")
+                .toAbsolutePath().normalize());
+        assertThat(saved.panels()).filteredOn(p -> p instanceof WaveformPanel).extracting(p -> ((WaveformPanel) p).channels())
+                .containsExactly("FCz", "Pz");
+        // what you see is what you export: waves, their colours and dashes, polarity, colour limits
+        assertThat(saved.conditions()).extracting(c -> c.wave()).containsExactly("frequent", "rare", "rare - frequent");
+        List<WaveEntry> shown = read(() -> frame.workbench().model().shownEntries());
+        for (int i = 0; i < shown.size(); i++) {
+            int rgb = Theme.LIGHT.wave(shown.get(i).colourIndex()).getRGB() & 0xffffff;
+            assertThat(saved.conditions().get(i).colour()).isEqualTo(String.format("#%06X", rgb));
+            assertThat(saved.conditions().get(i).dashed()).isEqualTo(shown.get(i).contrast());
+        }
+        assertThat(saved.polarity()).isEqualTo(Polarity.NEGATIVE_UP);
+        assertThat(saved.maps().limit()).isEqualTo(4.0);
+        // what the window exported is what the figure command makes from the saved spec
+        assertThat(Files.readString(svg, StandardCharsets.UTF_8)).isEqualTo(Figures.svg(Figures.load(spec)));
+        composer.close();
+    }
+}
