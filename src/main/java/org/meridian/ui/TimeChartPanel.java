@@ -1,14 +1,18 @@
 package org.meridian.ui;
 
 import java.awt.BasicStroke;
+import java.awt.Graphics;
 import java.awt.Graphics2D;
+import java.awt.RenderingHints;
 import java.awt.Shape;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
+import java.awt.image.BufferedImage;
 import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.event.ChartChangeEvent;
 import org.jfree.chart.panel.AbstractOverlay;
 import org.jfree.chart.panel.Overlay;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
@@ -16,10 +20,15 @@ import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.ui.RectangleEdge;
 
 /**
- * A chart whose domain is time, linked to the {@link ViewState}: the window band and the time
- * cursor are drawn as an overlay above the chart's buffered image (so moving the cursor redraws
- * no data), the mouse moves the cursor and the band's edges ({@link TimeDrag}), and what lies
- * under the mouse goes to the status bar through a {@link Probe}.
+ * A chart whose domain is time, linked to the {@link ViewState}: the chart is drawn once into an
+ * image at device resolution (sharp on HiDPI screens) and redrawn only when the chart itself
+ * changes or the panel is resized; the window band and the time cursor are drawn over that image
+ * on every paint, so moving the cursor or the band copies one image and draws three lines, and
+ * never redraws the data. The mouse moves the cursor and the band's edges ({@link TimeDrag}), and
+ * what lies under the mouse goes to the status bar through a {@link Probe}.
+ *
+ * <p>JFreeChart's own buffer is left off: it is made at the panel's size in user pixels, so it
+ * would be blurred on a scaled screen.
  */
 final class TimeChartPanel extends ChartPanel {
     /** Says what lies under the mouse at a time and a value of the plot under it. */
@@ -30,7 +39,13 @@ final class TimeChartPanel extends ChartPanel {
     }
 
     private final Workbench bench;
+    private final TimeOverlay overlay = new TimeOverlay();
     private Probe probe = (t, v, p) -> null;
+    /** The chart without band and cursor, in device pixels; null or stale when it must be redrawn. */
+    private BufferedImage image;
+    private boolean stale = true;
+    private double imageScale;
+    private int chartDraws;
 
     TimeChartPanel(Workbench bench, JFreeChart chart) {
         super(chart, false);
@@ -43,7 +58,6 @@ final class TimeChartPanel extends ChartPanel {
         setMinimumDrawHeight(10);
         setMaximumDrawWidth(10_000);
         setMaximumDrawHeight(10_000);
-        addOverlay(new TimeOverlay());
         new TimeDrag(this, bench.state(), this::xToMs, this::msToX,
                 e -> getScreenDataArea().contains(e.getPoint())).install();
         addMouseMotionListener(new MouseAdapter() {
@@ -68,6 +82,60 @@ final class TimeChartPanel extends ChartPanel {
                 repaint();
             }
         });
+    }
+
+    @Override
+    public void setChart(JFreeChart chart) {
+        stale = true;
+        super.setChart(chart);
+    }
+
+    @Override
+    public void chartChanged(ChartChangeEvent event) {
+        stale = true;
+        super.chartChanged(event);
+    }
+
+    /** How often the chart has been drawn into the image (for tests: a cursor step draws none). */
+    int chartDraws() {
+        return chartDraws;
+    }
+
+    /**
+     * Copies the chart's image (redrawn first when the chart, the size or the screen's scale
+     * changed) and draws the window band and the cursor over it.
+     */
+    @Override
+    public void paintComponent(Graphics g) {
+        if (getChart() == null) {
+            super.paintComponent(g);
+            return;
+        }
+        Graphics2D g2 = (Graphics2D) g.create();
+        try {
+            double scale = g2.getTransform().getScaleX();
+            int w = Math.max(1, (int) Math.ceil(getWidth() * scale));
+            int h = Math.max(1, (int) Math.ceil(getHeight() * scale));
+            if (stale || image == null || image.getWidth() != w || image.getHeight() != h || imageScale != scale) {
+                image = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+                Graphics2D ig = image.createGraphics();
+                try {
+                    ig.scale(scale, scale);
+                    ig.setClip(0, 0, getWidth(), getHeight());
+                    super.paintComponent(ig);
+                } finally {
+                    ig.dispose();
+                }
+                imageScale = scale;
+                stale = false;
+                chartDraws++;
+            }
+            g2.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR);
+            g2.drawImage(image, 0, 0, getWidth(), getHeight(), null);
+            overlay.paintOverlay(g2, this);
+        } finally {
+            g2.dispose();
+        }
     }
 
     void setProbe(Probe p) {
@@ -117,7 +185,7 @@ final class TimeChartPanel extends ChartPanel {
         return (XYPlot) getChart().getPlot();
     }
 
-    /** Draws the window band and the cursor above the chart. */
+    /** Draws the window band and the cursor above the chart's image. */
     private final class TimeOverlay extends AbstractOverlay implements Overlay {
         @Override
         public void paintOverlay(Graphics2D g2, ChartPanel panel) {
