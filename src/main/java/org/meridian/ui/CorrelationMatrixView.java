@@ -27,6 +27,9 @@ final class CorrelationMatrixView extends JComponent {
     private final Workbench bench;
     private SpanData data;
     private BufferedImage image;
+    /** Everything but the cursor, at device resolution, and what it was drawn for. */
+    private BufferedImage layer;
+    private Object layerKey;
     private Rectangle2D cells = new Rectangle2D.Double();
 
     CorrelationMatrixView(Workbench bench) {
@@ -66,6 +69,7 @@ final class CorrelationMatrixView extends JComponent {
             if (what.contains(ViewState.Aspect.CURSOR) || what.contains(ViewState.Aspect.COLOUR_RANGE)) {
                 if (what.contains(ViewState.Aspect.COLOUR_RANGE)) {
                     image = null;
+                    layer = null;
                 }
                 repaint();
             }
@@ -75,6 +79,7 @@ final class CorrelationMatrixView extends JComponent {
     void show(SpanData d) {
         data = d;
         image = null;
+        layer = null;
         repaint();
     }
 
@@ -105,7 +110,47 @@ final class CorrelationMatrixView extends JComponent {
     protected void paintComponent(Graphics graphics) {
         Graphics2D g = (Graphics2D) graphics.create();
         try {
+            double scale = g.getTransform().getScaleX();
             Theme theme = bench.theme();
+            Object key = java.util.List.of(getWidth(), getHeight(), scale, theme, bench.state().colourScale());
+            if (layer == null || !key.equals(layerKey)) {
+                layer = drawLayer(theme, scale);
+                layerKey = key;
+            }
+            g.setRenderingHint(RenderingHints.KEY_INTERPOLATION, RenderingHints.VALUE_INTERPOLATION_NEAREST_NEIGHBOR);
+            g.drawImage(layer, 0, 0, getWidth(), getHeight(), null);
+            if (data == null) {
+                return;
+            }
+            int n = data.trace().size();
+            double left = cells.getX();
+            double top = cells.getY();
+            double side = cells.getWidth();
+            int cursor = bench.state().axis().nearestIndex(bench.state().cursorMs()) - data.window().first();
+            if (cursor >= 0 && cursor < n) {
+                g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+                double x = left + (cursor + 0.5) * side / n;
+                double y = top + (cursor + 0.5) * side / n;
+                g.setColor(theme.cursor());
+                g.setStroke(new BasicStroke(1.5f));
+                g.draw(new Line2D.Double(x, top, x, top + side));
+                g.draw(new Line2D.Double(left, y, left + side, y));
+            }
+        } finally {
+            g.dispose();
+        }
+    }
+
+    /**
+     * Everything but the cursor cross, at device resolution: drawn again only when the size, the
+     * screen's scale, the theme, the colour scale or the data change, so a cursor step copies it.
+     */
+    private BufferedImage drawLayer(Theme theme, double scale) {
+        BufferedImage img = new BufferedImage(Math.max(1, (int) Math.ceil(getWidth() * scale)),
+                Math.max(1, (int) Math.ceil(getHeight() * scale)), BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        try {
+            g.scale(scale, scale);
             g.setColor(theme.plotBackground());
             g.fillRect(0, 0, getWidth(), getHeight());
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
@@ -121,7 +166,7 @@ final class CorrelationMatrixView extends JComponent {
             String title = "Spatial correlation r";
             g.drawString(title, 6, fm.getAscent() + 2);
             if (data == null) {
-                return;
+                return img;
             }
             double barW = 60;
             double top = fm.getHeight() + 6;
@@ -142,21 +187,12 @@ final class CorrelationMatrixView extends JComponent {
             g.drawString(a, (float) left, (float) (top + side + fm.getAscent() + 2));
             g.drawString(b, (float) (left + side - fm.stringWidth(b)), (float) (top + side + fm.getAscent() + 2));
             g.drawString(a, (float) (left - fm.stringWidth(a) - 4), (float) (top + fm.getAscent()));
-            int n = t.size();
-            int cursor = bench.state().axis().nearestIndex(bench.state().cursorMs()) - data.window().first();
-            if (cursor >= 0 && cursor < n) {
-                double x = left + (cursor + 0.5) * side / n;
-                double y = top + (cursor + 0.5) * side / n;
-                g.setColor(theme.cursor());
-                g.setStroke(new BasicStroke(1.5f));
-                g.draw(new Line2D.Double(x, top, x, top + side));
-                g.draw(new Line2D.Double(left, y, left + side, y));
-            }
             double readable = Math.max(1, ChartStyle.tickFont().getSize2D() / (side * 0.055));
             ColourBar.draw(g, new Rectangle2D.Double(left + side + 6, top, barW, side),
                     bench.state().colourScale(), new ColourLimits(-1, 1), "r", readable);
         } finally {
             g.dispose();
         }
+        return img;
     }
 }

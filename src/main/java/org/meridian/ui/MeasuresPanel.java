@@ -221,9 +221,9 @@ final class MeasuresPanel extends JPanel {
     private void followCursor() {
         ViewState s = bench.state();
         StudySession session = bench.model().session();
+        // the model's update event repaints the value-at-cursor column's cells and nothing else
         rows.cursor(s.cursorSample(), Texts.ms(s.cursorMs()),
                 session == null ? "µV" : session.study().unit().symbol());
-        table.repaint();
     }
 
     /** The title of the value-at-cursor column's tool tip, e.g. {@code At 352 ms}. */
