@@ -61,7 +61,7 @@ public class MapFrameBench {
     private int[] rows;
     private Waveforms grand;
     private MapStyle style;
-    private double halfRange;
+    private org.meridian.maps.ColourLimits limits;
     private BufferedImage screen;
     private Graphics2D g;
     private int sample;
@@ -76,7 +76,7 @@ public class MapFrameBench {
         live = new LiveMap(session.raster(quantity, (int) Math.round(bounds.getWidth() * scale)));
         rows = session.spline().rowsIn(grand);
         style = MapStyle.defaults().withHighlighted(List.of("Pz"));
-        halfRange = quantity == Quantity.CSD ? 400 : 8;
+        limits = org.meridian.maps.ColourLimits.automatic(quantity == Quantity.CSD ? 400 : 8);
         screen = new BufferedImage(WIDTH * scale, HEIGHT * scale, BufferedImage.TYPE_INT_RGB);
         g = screen.createGraphics();
         g.scale(scale, scale);
@@ -89,7 +89,7 @@ public class MapFrameBench {
         double[] values = m.valuesOf(grand, rows);
         g.setColor(java.awt.Color.WHITE);
         g.fillRect(0, 0, WIDTH, HEIGHT);
-        return live.paint(g, bounds, values, grand.unit(), coarse -> halfRange, style, contours).coarse();
+        return live.paint(g, bounds, values, grand.unit(), coarse -> limits, style, contours).coarse();
     }
 
     /** 128 positions of the 10-5 system spread over the head (every k-th above the lower ring). */

@@ -1,5 +1,7 @@
 package org.meridian.ui;
 
+import org.meridian.maps.ColourLimits;
+
 /**
  * How the colour limits of the scalp map and the map strip are chosen. Every mode is symmetric
  * about zero, so zero always takes the middle colour of the diverging scale.
@@ -59,6 +61,23 @@ public record ColourRange(Mode mode, double limit) {
 
     public static ColourRange locked(double halfRange) {
         return new ColourRange(Mode.LOCKED, halfRange);
+    }
+
+    /**
+     * The colour limits of a map in this range: automatic limits (rounded up to a round number)
+     * from the wave's largest value over all samples, or from the largest value of the maps on
+     * screen; a locked range exactly as set, never rounded, so the map, the strip and an exported
+     * figure agree.
+     *
+     * @param waveMaxAbs  the map wave's largest |value| at the electrodes over the whole time axis
+     * @param shownMaxAbs the largest |value| of the map (or maps) on screen
+     */
+    public ColourLimits limits(double waveMaxAbs, double shownMaxAbs) {
+        return switch (mode) {
+            case AUTO -> ColourLimits.automatic(waveMaxAbs);
+            case SYMMETRIC -> ColourLimits.automatic(shownMaxAbs);
+            case LOCKED -> ColourLimits.symmetric(limit);
+        };
     }
 
     @Override

@@ -5,7 +5,7 @@ import java.awt.RenderingHints;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.util.Objects;
-import java.util.function.ToDoubleFunction;
+import java.util.function.Function;
 import org.meridian.core.Unit;
 import org.meridian.maps.ColourBar;
 import org.meridian.maps.ColourLimits;
@@ -66,13 +66,13 @@ final class LiveMap {
 
     /**
      * Paints a frame from one value per spline channel into the map's bounds, the colour bar
-     * beside it. {@code halfRange} chooses the colour limits (±) from the frame's coarse map.
+     * beside it. {@code limitsOf} chooses the colour limits, given the frame's coarse map.
      * Contour lines are left out when {@code contours} is false (while the cursor moves fast).
      */
     Frame paint(Graphics2D g, Rectangle2D bounds, double[] values, Unit unit,
-            ToDoubleFunction<ScalpMap> halfRange, MapStyle style, boolean contours) {
+            Function<ScalpMap, ColourLimits> limitsOf, MapStyle style, boolean contours) {
         ScalpMap coarse = raster.coarseMap(values, unit);
-        ColourLimits limits = ColourLimits.automatic(halfRange.applyAsDouble(coarse));
+        ColourLimits limits = limitsOf.apply(coarse);
         if (style.scale() != tableScale) {
             tableScale = style.scale();
             table = tableScale.argbTable(COLOURS);

@@ -196,14 +196,9 @@ final class ScalpMapPanel extends JPanel {
                 : MapMoment.window(s.windowStartMs(), s.windowEndMs());
     }
 
-    /** The colour limits' half-range for a frame, by the state's colour range. */
-    private double halfRange(Averages.WaveAverage w, MapQuantity q, ScalpMap frame) {
-        ColourRange r = bench.state().colourRange();
-        return switch (r.mode()) {
-            case AUTO -> w.maxAbs(q);
-            case SYMMETRIC -> frame.maxAbs();
-            case LOCKED -> r.limit();
-        };
+    /** The colour limits of a frame, by the state's colour range (a locked limit as set). */
+    private ColourLimits limitsOf(Averages.WaveAverage w, MapQuantity q, ScalpMap frame) {
+        return bench.state().colourRange().limits(w.maxAbs(q), frame.maxAbs());
     }
 
     /** Builds the raster of a display size in the background, once; the canvas repaints when done. */
@@ -315,7 +310,7 @@ final class ScalpMapPanel extends JPanel {
                     live = new LiveMap(raster);
                 }
                 LiveMap.Frame f = live.paint(g, mapBounds, values, w.grand().unit(),
-                        coarse -> halfRange(w, q, coarse), style, !scrubbing);
+                        coarse -> limitsOf(w, q, coarse), style, !scrubbing);
                 current = f.coarse();
                 limits = f.limits();
                 return;
@@ -323,7 +318,7 @@ final class ScalpMapPanel extends JPanel {
             requestRaster(session, q, pixels);
             MapMaker maker = session.maker(q.quantity(), StudySession.LIVE_RESOLUTION);
             current = maker.map(values, w.grand().unit(), m.label());
-            limits = ColourLimits.automatic(halfRange(w, q, current));
+            limits = limitsOf(w, q, current);
             paintFrame(g, mapBounds, current, limits, style);
         }
 
