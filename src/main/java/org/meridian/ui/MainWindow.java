@@ -4,11 +4,9 @@ import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.KeyboardFocusManager;
 import java.awt.Rectangle;
-import java.awt.datatransfer.DataFlavor;
 import java.awt.event.ActionEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
-import java.io.File;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -23,7 +21,6 @@ import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
-import javax.swing.TransferHandler;
 import javax.swing.text.JTextComponent;
 import org.meridian.core.Study;
 
@@ -242,29 +239,9 @@ public final class MainWindow extends JFrame {
         });
     }
 
+    /** A study dropped anywhere on the window opens, over tables and text fields too. */
     private void acceptDrops(JComponent root) {
-        root.setTransferHandler(new TransferHandler() {
-            @Override
-            public boolean canImport(TransferSupport support) {
-                return support.isDataFlavorSupported(DataFlavor.javaFileListFlavor);
-            }
-
-            @Override
-            public boolean importData(TransferSupport support) {
-                try {
-                    @SuppressWarnings("unchecked")
-                    List<File> files = (List<File>) support.getTransferable().getTransferData(DataFlavor.javaFileListFlavor);
-                    if (files.isEmpty()) {
-                        return false;
-                    }
-                    open(files.get(0).toPath(), ViewOptions.defaults());
-                    return true;
-                } catch (Exception e) {
-                    bench.report(e);
-                    return false;
-                }
-            }
-        });
+        StudyDrop.installOn(root, path -> open(path, ViewOptions.defaults()), bench::report);
     }
 
     private void restoreBounds() {
