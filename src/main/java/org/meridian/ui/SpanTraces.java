@@ -90,7 +90,7 @@ final class SpanTraces {
             if (s.samples() >= 3) {
                 XYTextAnnotation label = new XYTextAnnotation(String.valueOf(s.state()), (s.startMs() + s.endMs()) / 2, 0.5);
                 label.setFont(ChartStyle.font(ChartStyle.tickFont().getSize2D(), Font.BOLD));
-                label.setPaint(Color.WHITE);
+                label.setPaint(Theme.inkOn(c));
                 label.setToolTipText("State " + s.state() + ": " + Texts.window(s.startMs(), s.endMs()));
                 states.addAnnotation(label);
             }

@@ -109,6 +109,33 @@ public enum Theme {
         return new Color(c.getRed(), c.getGreen(), c.getBlue(), 56);
     }
 
+    /**
+     * Text colour on a coloured fill: near-black or white, whichever contrasts more with the fill
+     * by the WCAG 2.1 contrast ratio, so labels stay readable on light fills (yellow) and dark
+     * ones (blue) in either theme.
+     */
+    public static Color inkOn(Color fill) {
+        Color dark = new Color(0x1a1a1a);
+        return contrast(fill, dark) >= contrast(fill, Color.WHITE) ? dark : Color.WHITE;
+    }
+
+    /** The contrast ratio (L1 + 0.05) / (L2 + 0.05) of two colours, L1 the lighter (WCAG 2.1). */
+    static double contrast(Color a, Color b) {
+        double la = luminance(a);
+        double lb = luminance(b);
+        return (Math.max(la, lb) + 0.05) / (Math.min(la, lb) + 0.05);
+    }
+
+    /** Relative luminance of an sRGB colour (WCAG 2.1): 0.2126 R + 0.7152 G + 0.0722 B, linearised. */
+    static double luminance(Color c) {
+        return 0.2126 * linear(c.getRed()) + 0.7152 * linear(c.getGreen()) + 0.0722 * linear(c.getBlue());
+    }
+
+    private static double linear(int channel) {
+        double v = channel / 255.0;
+        return v <= 0.04045 ? v / 12.92 : Math.pow((v + 0.055) / 1.055, 2.4);
+    }
+
     public Theme other() {
         return this == LIGHT ? DARK : LIGHT;
     }
