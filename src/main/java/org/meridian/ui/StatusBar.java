@@ -13,13 +13,14 @@ import javax.swing.UIManager;
 
 /**
  * The strip along the bottom of the window: on the left what lies under the mouse (time,
- * channel, value), in the middle the last message, on the right the running task with its
- * progress bar and Cancel.
+ * channel, value — the value first, then which wave it belongs to; each field as wide as its
+ * text), in the middle the last message, on the right the running task with its progress bar and
+ * Cancel.
  */
 final class StatusBar extends JPanel implements Tasks.Observer {
-    private final JLabel time = new JLabel(" ");
-    private final JLabel channel = new JLabel(" ");
-    private final JLabel value = new JLabel(" ");
+    private final JLabel time = new FieldLabel(7);
+    private final JLabel channel = new FieldLabel(5);
+    private final JLabel value = new FieldLabel(12);
     private final JLabel message = new JLabel(" ");
     private final JLabel taskLabel = new JLabel();
     private final JProgressBar progress = new JProgressBar(0, 1000);
@@ -41,9 +42,6 @@ final class StatusBar extends JPanel implements Tasks.Observer {
         for (JLabel l : new JLabel[] {time, channel, value}) {
             l.setFont(mono);
         }
-        time.setPreferredSize(new Dimension(mono.getSize() * 7, time.getPreferredSize().height));
-        channel.setPreferredSize(new Dimension(mono.getSize() * 5, time.getPreferredSize().height));
-        value.setPreferredSize(new Dimension(mono.getSize() * 12, time.getPreferredSize().height));
         JPanel under = new JPanel(new FlowLayout(FlowLayout.LEFT, 10, 0));
         under.setOpaque(false);
         under.add(time);
@@ -68,6 +66,36 @@ final class StatusBar extends JPanel implements Tasks.Observer {
         work.add(cancel);
         add(work, BorderLayout.EAST);
         showing(null);
+    }
+
+    /**
+     * A field of the pointer readout: at least {@code columns} characters wide, so short readouts
+     * do not make the line jump, and as wide as its text, so a long one is never cut off.
+     */
+    private static final class FieldLabel extends JLabel {
+        private final int columns;
+
+        FieldLabel(int columns) {
+            super(" ");
+            this.columns = columns;
+        }
+
+        @Override
+        public Dimension getPreferredSize() {
+            Dimension d = super.getPreferredSize();
+            int least = getFontMetrics(getFont()).charWidth('0') * columns;
+            return new Dimension(Math.max(d.width, least), d.height);
+        }
+
+        @Override
+        public Dimension getMinimumSize() {
+            return getPreferredSize();
+        }
+    }
+
+    /** The readout of what lies under the mouse as shown: time, channel and value (for tests). */
+    String pointerText() {
+        return (time.getText() + "  " + channel.getText() + "  " + value.getText()).trim();
     }
 
     /** Shows what lies under the mouse; empty strings clear a field. */

@@ -226,7 +226,7 @@ final class WaveformCharts {
                     double value = w.grand().value(c, sample);
                     if (Math.abs(value - v) < bestDistance) {
                         bestDistance = Math.abs(value - v);
-                        best = new String[] {ch, w.name() + "  " + Texts.value(value, w.grand().unit().symbol())};
+                        best = new String[] {ch, Texts.value(value, w.grand().unit().symbol()) + "  " + w.name()};
                     }
                 }
             }
@@ -257,7 +257,7 @@ final class WaveformCharts {
             double value = w.gfp()[sample];
             if (Math.abs(value - v) < bestDistance) {
                 bestDistance = Math.abs(value - v);
-                best = new String[] {"GFP", w.name() + "  " + Texts.value(value, w.grand().unit().symbol())};
+                best = new String[] {"GFP", Texts.value(value, w.grand().unit().symbol()) + "  " + w.name()};
             }
         }
         return best;
