@@ -29,8 +29,11 @@ import org.meridian.montage.Projection;
  * up, left on the left); channels without a position in a row along the bottom. All small plots
  * share one time and one value scale, shown once by the scale bars in the lower-left corner.
  * Clicking a small plot makes its channel the current one (Ctrl-click adds it to the selection);
- * dragging inside a plot moves the time cursor. The current channel's plot is outlined in the
- * selection colour, the other selected ones more thinly.
+ * inside a plot the time gestures of every time plot apply ({@link TimeDrag}): dragging moves the
+ * time cursor, the window band's edges can be gripped and dragged, Shift-drag sweeps a new
+ * window. The current channel's plot is outlined in the selection colour, the other selected
+ * ones more thinly. The small plots are kept as an image; the band and the cursor are drawn over
+ * it, so moving either redraws no wave.
  */
 final class ScalpLayoutView extends JComponent {
     private final Workbench bench;
@@ -39,6 +42,8 @@ final class ScalpLayoutView extends JComponent {
     private java.awt.image.BufferedImage plots;
     private Object plotsKey;
     private Slot dragging;
+    /** The small plot the time gestures refer to: the one pressed in, else the one under the mouse. */
+    private Slot hovered;
 
     /** A small plot: its channel and its box in component pixels. */
     private record Slot(String channel, Rectangle2D box) {
@@ -59,6 +64,7 @@ final class ScalpLayoutView extends JComponent {
                 if (s == null) {
                     return;
                 }
+                hovered = s;
                 if ((e.getModifiersEx() & (InputEvent.CTRL_DOWN_MASK | InputEvent.META_DOWN_MASK)) != 0) {
                     bench.state().toggleChannel(s.channel());
                 } else {
@@ -68,9 +74,6 @@ final class ScalpLayoutView extends JComponent {
 
             @Override
             public void mouseDragged(MouseEvent e) {
-                if (dragging != null) {
-                    bench.state().setCursorMs(timeAt(dragging, e.getX()));
-                }
                 mouseMoved(e);
             }
 
@@ -82,6 +85,9 @@ final class ScalpLayoutView extends JComponent {
             @Override
             public void mouseMoved(MouseEvent e) {
                 Slot s = slotAt(e.getPoint());
+                if (dragging == null) {
+                    hovered = s;
+                }
                 if (s == null) {
                     bench.pointer("", "", "");
                     return;
@@ -104,6 +110,19 @@ final class ScalpLayoutView extends JComponent {
         };
         addMouseListener(mouse);
         addMouseMotionListener(mouse);
+        // after the listener above, which chooses the plot the gesture belongs to
+        new TimeDrag(this, bench.state(), x -> hovered == null ? bench.state().cursorMs() : timeAt(hovered, x),
+                this::xOfTime, e -> slotAt(e.getPoint()) != null).withoutCursorOnPress().install();
+    }
+
+    /** The x pixel of a time in the plot the mouse is over (or last pressed in). */
+    private double xOfTime(double ms) {
+        if (hovered == null) {
+            return Double.NaN;
+        }
+        TimeAxis axis = bench.state().axis();
+        Rectangle2D b = hovered.box();
+        return b.getX() + (ms - axis.firstMs()) / (axis.lastMs() - axis.firstMs()) * b.getWidth();
     }
 
     /** The channel of the small plot at a point, if any (for tests and clicks). */
@@ -132,7 +151,7 @@ final class ScalpLayoutView extends JComponent {
         return null;
     }
 
-    private double timeAt(Slot s, int x) {
+    private double timeAt(Slot s, double x) {
         TimeAxis axis = bench.state().axis();
         double f = (x - s.box().getX()) / s.box().getWidth();
         return axis.firstMs() + f * (axis.lastMs() - axis.firstMs());
@@ -232,8 +251,7 @@ final class ScalpLayoutView extends JComponent {
             layoutSlots();
             double scale = g.getTransform().getScaleX();
             Object key = java.util.List.of(getWidth(), getHeight(), scale, bench.model().averages(),
-                    bench.state().shownWaves(), bench.state().selectedChannels(), bench.state().polarity(),
-                    bench.state().windowStartMs(), bench.state().windowEndMs(), theme);
+                    bench.state().shownWaves(), bench.state().selectedChannels(), bench.state().polarity(), theme);
             if (plots == null || !key.equals(plotsKey)) {
                 plots = drawPlots(theme, scale);
                 plotsKey = key;
@@ -272,16 +290,20 @@ final class ScalpLayoutView extends JComponent {
         return img;
     }
 
-    /** The time cursor in every small plot. */
+    /** The window band and the time cursor in every small plot. */
     private void drawCursors(Graphics2D g, Theme theme) {
         ViewState state = bench.state();
         TimeAxis axis = state.axis();
         double span = axis.lastMs() - axis.firstMs();
-        g.setColor(theme.cursor());
-        g.setStroke(new BasicStroke(1f));
         for (Slot s : slots) {
             Rectangle2D b = s.box();
+            double a = b.getX() + (state.windowStartMs() - axis.firstMs()) / span * b.getWidth();
+            double e = b.getX() + (state.windowEndMs() - axis.firstMs()) / span * b.getWidth();
+            g.setColor(theme.windowFill());
+            g.fill(new Rectangle2D.Double(a, b.getY(), e - a, b.getHeight()));
             double cx = b.getX() + (state.cursorMs() - axis.firstMs()) / span * b.getWidth();
+            g.setColor(theme.cursor());
+            g.setStroke(new BasicStroke(1f));
             g.draw(new Line2D.Double(cx, b.getY(), cx, b.getMaxY()));
         }
     }
@@ -306,10 +328,6 @@ final class ScalpLayoutView extends JComponent {
         Rectangle2D b = s.box();
         TimeAxis axis = state.axis();
         double span = axis.lastMs() - axis.firstMs();
-        double a = b.getX() + (state.windowStartMs() - axis.firstMs()) / span * b.getWidth();
-        double e = b.getX() + (state.windowEndMs() - axis.firstMs()) / span * b.getWidth();
-        g.setColor(theme.windowFill());
-        g.fill(new Rectangle2D.Double(a, b.getY(), e - a, b.getHeight()));
         double zeroY = b.getCenterY();
         g.setColor(theme.grid());
         g.setStroke(new BasicStroke(1f));

@@ -27,6 +27,7 @@ final class TimeDrag extends MouseAdapter {
     private final Predicate<MouseEvent> inTimeArea;
     private Grip grip;
     private double sweepFromMs;
+    private boolean cursorOnPress = true;
 
     TimeDrag(JComponent plot, ViewState state, DoubleUnaryOperator xToMs, DoubleUnaryOperator msToX,
             Predicate<MouseEvent> inTimeArea) {
@@ -35,6 +36,15 @@ final class TimeDrag extends MouseAdapter {
         this.xToMs = xToMs;
         this.msToX = msToX;
         this.inTimeArea = inTimeArea;
+    }
+
+    /**
+     * Leaves the cursor where it is on a plain press (it still follows a drag): for plots where a
+     * click means something else, such as choosing a channel.
+     */
+    TimeDrag withoutCursorOnPress() {
+        cursorOnPress = false;
+        return this;
     }
 
     void install() {
@@ -53,7 +63,11 @@ final class TimeDrag extends MouseAdapter {
         double ms = xToMs.applyAsDouble(e.getX());
         grip = gripAt(e);
         switch (grip) {
-            case CURSOR -> state.setCursorMs(ms);
+            case CURSOR -> {
+                if (cursorOnPress) {
+                    state.setCursorMs(ms);
+                }
+            }
             case SWEEP -> sweepFromMs = ms;
             default -> { }
         }
