@@ -49,9 +49,13 @@ final class MeasureRows extends AbstractTableModel {
     private String cursorTitle = "At cursor";
     private String dataUnit = "µV";
 
-    /** Shows a table; grand-average rows only unless {@code participants}. */
-    void show(MeasureTable newTable, List<Measure> newMeasures, List<String> newUnits, boolean participants,
+    /**
+     * Shows a table; grand-average rows only unless {@code participants}. Returns whether the
+     * columns stayed the same (then only the data changed, and a row sorter keeps its order).
+     */
+    boolean show(MeasureTable newTable, List<Measure> newMeasures, List<String> newUnits, boolean participants,
             Series series) {
+        boolean sameColumns = newMeasures.equals(measures) && newUnits.equals(units);
         this.table = newTable;
         this.measures = List.copyOf(newMeasures);
         this.units = List.copyOf(newUnits);
@@ -79,7 +83,19 @@ final class MeasureRows extends AbstractTableModel {
         }
         grand.addAll(grandLast);
         this.rows = grand;
-        fireTableStructureChanged();
+        if (sameColumns) {
+            fireTableDataChanged();
+        } else {
+            fireTableStructureChanged();
+        }
+        return sameColumns;
+    }
+
+    /** Empties the table (no wave or no channel to measure). */
+    void clear() {
+        table = null;
+        rows = List.of();
+        fireTableDataChanged();
     }
 
     MeasureTable table() {

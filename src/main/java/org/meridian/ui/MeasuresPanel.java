@@ -37,11 +37,14 @@ import org.meridian.signal.TimeWindow;
 
 /**
  * The measures of DESIGN §6.3 for the time window and the selected channels, for every shown
- * wave: the grand average's row first, each participant's on request. Sortable by any column;
- * Copy puts the rows on screen on the clipboard as tab-separated text; Export writes the tidy
- * table ({@link MeasureTable}, every participant and the grand average) through
- * {@link AtomicFiles}. Recomputed in a background task whenever the window, channels, waves or
- * participants change (a newer request cancels an older one).
+ * wave: the grand average's row first, each participant's on request. Polarity positive or
+ * negative (peaks and areas), or signed (areas of the signed wave; no peaks). Sortable by any
+ * column, and the sort order survives every refresh; Copy puts the rows on screen on the
+ * clipboard as tab-separated text; Export writes the tidy table ({@link MeasureTable}, every
+ * participant and the grand average) through {@link AtomicFiles}. Recomputed in a background
+ * task whenever the window or channels change or new averages arrive (a newer request cancels an
+ * older one); the value-at-cursor column reads the grand averages the model holds. With no wave
+ * shown or no channel selected the table is emptied and says why.
  */
 final class MeasuresPanel extends JPanel {
     private final Workbench bench;
@@ -59,7 +62,7 @@ final class MeasuresPanel extends JPanel {
         }
     };
     private final JLabel scope = new JLabel(" ");
-    private final JComboBox<Polarity> polarity = new JComboBox<>(new Polarity[] {Polarity.POSITIVE, Polarity.NEGATIVE});
+    private final JComboBox<Polarity> polarity = new JComboBox<>(Polarity.values());
     private final JCheckBox participants = new JCheckBox("Participants");
     private final JLabel warnings = new JLabel();
     private Result last;
@@ -76,18 +79,25 @@ final class MeasuresPanel extends JPanel {
         title.putClientProperty("FlatLaf.styleClass", "h4");
         top.add(title);
         polarity.setName("measures.polarity");
-        polarity.setToolTipText("Peaks and areas of positive or of negative deflections");
+        polarity.setToolTipText("<html>Peaks and areas of the positive or of the negative deflections;"
+                + "<br>signed: the area of the signed wave (and its fractional area latency), no peaks</html>");
         polarity.setRenderer(new javax.swing.DefaultListCellRenderer() {
             @Override
             public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> l, Object v,
                     int i, boolean s, boolean f) {
-                return super.getListCellRendererComponent(l, v == Polarity.NEGATIVE ? "negative" : "positive", i, s, f);
+                return super.getListCellRendererComponent(l, polarityWord((Polarity) v), i, s, f);
             }
         });
         polarity.addActionListener(e -> recompute());
         participants.setName("measures.participants");
         participants.setToolTipText("Show each participant's row under the grand average's");
-        participants.addActionListener(e -> showTable(rows.table()));
+        participants.addActionListener(e -> {
+            if (participants.isSelected() && last != null && !last.withParticipants()) {
+                recompute();
+            } else {
+                showTable(rows.table());
+            }
+        });
         JButton copy = new JButton("Copy");
         copy.setName("measures.copy");
         copy.setToolTipText("Copy the rows on screen as tab-separated text");
@@ -114,14 +124,42 @@ final class MeasuresPanel extends JPanel {
         table.setFillsViewportHeight(true);
         add(new JScrollPane(table), BorderLayout.CENTER);
 
+        // shown waves and participants change the model's averages, which arrive as AVERAGES
         bench.state().addListener((s, what) -> {
-            if (what.contains(ViewState.Aspect.WINDOW) || what.contains(ViewState.Aspect.CHANNELS)
-                    || what.contains(ViewState.Aspect.WAVES) || what.contains(ViewState.Aspect.PARTICIPANTS)) {
+            if (what.contains(ViewState.Aspect.WINDOW) || what.contains(ViewState.Aspect.CHANNELS)) {
                 recompute();
             } else if (what.contains(ViewState.Aspect.CURSOR)) {
                 followCursor();
             }
         });
+        bench.model().addListener((m, what) -> {
+            if (what.contains(ViewModel.Change.AVERAGES) || what.contains(ViewModel.Change.SESSION)) {
+                recompute();
+            }
+        });
+    }
+
+    /** How the polarity box names a polarity. */
+    static String polarityWord(Polarity p) {
+        return p == null ? "" : switch (p) {
+            case POSITIVE -> "positive";
+            case NEGATIVE -> "negative";
+            case SIGNED -> "signed area";
+        };
+    }
+
+    /** The measures that apply with a polarity (a signed polarity has areas and no peaks). */
+    static List<Measure> measuresFor(MeasureSettings settings) {
+        List<Measure> out = new ArrayList<>();
+        for (Measure m : Measures.all()) {
+            try {
+                m.check(settings);
+                out.add(m);
+            } catch (org.meridian.core.BadInputException e) {
+                // this measure does not apply with these settings: no column for it
+            }
+        }
+        return out;
     }
 
     JTable table() {
@@ -136,25 +174,37 @@ final class MeasuresPanel extends JPanel {
     private void recompute() {
         StudySession session = bench.model().session();
         ViewState s = bench.state();
-        if (session == null || s.shownWaves().isEmpty() || s.selectedChannels().isEmpty()) {
+        Averages averages = bench.model().averages();
+        List<String> waves = new ArrayList<>();
+        for (String name : s.shownWaves()) {
+            if (bench.model().entry(name) != null) {
+                waves.add(name);
+            }
+        }
+        if (session == null || waves.isEmpty() || s.selectedChannels().isEmpty()) {
+            bench.tasks().cancel("measures");
+            last = null;
+            rows.clear();
+            warnings.setText("");
+            warnings.setToolTipText(null);
+            scope.setText(session == null ? " " : waves.isEmpty() ? "No wave shown: tick a condition or contrast"
+                    : "No channel selected: click one on the scalp map");
             return;
         }
         TimeWindow window = new TimeWindow(s.windowStartMs(), s.windowEndMs());
+        MeasureSettings settings = MeasureSettings.defaults().withPolarity((Polarity) polarity.getSelectedItem());
         MeasureRequest.Builder b = MeasureRequest.builder()
                 .window(window)
-                .settings(MeasureSettings.defaults().withPolarity((Polarity) polarity.getSelectedItem()))
+                .settings(settings)
                 .grand(true)
                 .excluded(s.excludedParticipants());
-        for (String name : s.shownWaves()) {
-            WaveEntry e = bench.model().entry(name);
-            if (e != null) {
-                b.condition(e.wave());
-            }
+        for (String name : waves) {
+            b.condition(bench.model().entry(name).wave());
         }
         for (String c : s.selectedChannels()) {
             b.channel(c);
         }
-        List<Measure> measures = Measures.all();
+        List<Measure> measures = measuresFor(settings);
         for (Measure m : measures) {
             b.measure(m);
         }
@@ -166,20 +216,24 @@ final class MeasuresPanel extends JPanel {
         }
         String channels = String.join(", ", s.selectedChannels());
         String scopeText = Texts.window(s.windowStartMs(), s.windowEndMs()) + "  ·  " + channels;
+        boolean withParticipants = participants.isSelected();
+        Map<String, float[]> grand = grandSeries(averages, request);
         bench.tasks().submit("measures", "Measures",
-                p -> new Result(Measurement.run(session.study(), request), series(session, request)),
+                p -> new Result(Measurement.run(session.study(), request),
+                        withParticipants ? participantSeries(session, request, grand) : grand,
+                        measures, units, withParticipants),
                 result -> {
                     last = result;
-                    rows.show(result.table(), measures, units, participants.isSelected(), result::seriesOf);
+                    showTable(result.table());
                     scope.setText(scopeText);
                     showWarnings(result.table());
                     followCursor();
-                    sizeColumns();
                 }, bench::report);
     }
 
-    /** A measure table and the wave behind each of its rows. */
-    private record Result(MeasureTable table, Map<String, float[]> series) {
+    /** A measure table, its measures and units, and the wave behind each of its rows. */
+    private record Result(MeasureTable table, Map<String, float[]> series, List<Measure> measures,
+            List<String> units, boolean withParticipants) {
         float[] seriesOf(String participant, String condition, String channel) {
             return series.get(key(participant, condition, channel));
         }
@@ -189,18 +243,34 @@ final class MeasuresPanel extends JPanel {
         return participant + "\u0000" + condition + "\u0000" + channel.toLowerCase(java.util.Locale.ROOT);
     }
 
-    /** Each row's wave (participants' and grand average's), for the value at the cursor. */
-    private static Map<String, float[]> series(StudySession session, MeasureRequest request) {
+    /**
+     * The grand average's wave behind each grand-average row, for the value at the cursor: read
+     * from the model's averages (computed once for the same participants), never recomputed.
+     */
+    private static Map<String, float[]> grandSeries(Averages averages, MeasureRequest request) {
         Map<String, float[]> out = new HashMap<>();
-        Study study = session.study();
         for (ConditionWave wave : request.conditions()) {
-            Waveforms grand = GrandAverage.of(study, wave, request.weighting(), request.excluded());
+            Averages.WaveAverage w = averages.wave(wave.name());
+            if (w == null) {
+                continue;
+            }
+            Waveforms grand = w.grand();
             for (String ch : request.channels()) {
                 int c = grand.indexOf(ch);
                 if (c >= 0) {
                     out.put(key(MeasureTable.GRAND, wave.name(), ch), grand.channel(c));
                 }
             }
+        }
+        return out;
+    }
+
+    /** The grand average's waves and each included participant's (off the event thread). */
+    private static Map<String, float[]> participantSeries(StudySession session, MeasureRequest request,
+            Map<String, float[]> grand) {
+        Map<String, float[]> out = new HashMap<>(grand);
+        Study study = session.study();
+        for (ConditionWave wave : request.conditions()) {
             for (int p = 0; p < study.participants().size(); p++) {
                 String name = study.participants().get(p);
                 if (GrandAverage.isExcluded(name, request.excluded())) {
@@ -231,18 +301,36 @@ final class MeasuresPanel extends JPanel {
         return rows.cursorColumnName();
     }
 
+    /**
+     * Shows the last result's rows (participants' too when ticked). The sort order the researcher
+     * chose survives: the model keeps its columns when they are unchanged, and otherwise the sort
+     * keys are put back on the columns of the same name.
+     */
     private void showTable(MeasureTable t) {
-        if (t != null && last != null) {
-            rows.show(t, Measures.all(), currentUnits(), participants.isSelected(), last::seriesOf);
-            sizeColumns();
+        if (t == null || last == null) {
+            return;
         }
+        List<javax.swing.RowSorter.SortKey> keys = table.getRowSorter() == null ? List.of()
+                : List.copyOf(table.getRowSorter().getSortKeys());
+        List<String> names = columnNames();
+        boolean sameColumns = rows.show(t, last.measures(), last.units(), participants.isSelected(), last::seriesOf);
+        if (!sameColumns && table.getRowSorter() != null) {
+            List<javax.swing.RowSorter.SortKey> kept = new ArrayList<>();
+            for (javax.swing.RowSorter.SortKey k : keys) {
+                int column = k.getColumn() < names.size() ? columnNames().indexOf(names.get(k.getColumn())) : -1;
+                if (column >= 0) {
+                    kept.add(new javax.swing.RowSorter.SortKey(column, k.getSortOrder()));
+                }
+            }
+            table.getRowSorter().setSortKeys(kept);
+        }
+        sizeColumns();
     }
 
-    private List<String> currentUnits() {
+    private List<String> columnNames() {
         List<String> out = new ArrayList<>();
-        Unit unit = bench.model().session() == null ? Unit.MICROVOLT : bench.model().session().study().unit();
-        for (Measure m : Measures.all()) {
-            out.add(m.unit(unit));
+        for (int c = 0; c < rows.getColumnCount(); c++) {
+            out.add(rows.getColumnName(c));
         }
         return out;
     }
