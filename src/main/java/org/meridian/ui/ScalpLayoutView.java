@@ -142,6 +142,20 @@ final class ScalpLayoutView extends JComponent {
         return null;
     }
 
+    /** The screen point of a time in a channel's small plot, at its middle height, or null (for tests). */
+    Point pointAt(String channel, double ms) {
+        layoutSlots();
+        TimeAxis axis = bench.state().axis();
+        for (Slot s : slots) {
+            if (s.channel().equalsIgnoreCase(channel)) {
+                Rectangle2D b = s.box();
+                double x = b.getX() + (ms - axis.firstMs()) / (axis.lastMs() - axis.firstMs()) * b.getWidth();
+                return new Point((int) Math.round(x), (int) b.getCenterY());
+            }
+        }
+        return null;
+    }
+
     private Slot slotAt(Point p) {
         for (Slot s : slots) {
             if (s.box().contains(p)) {

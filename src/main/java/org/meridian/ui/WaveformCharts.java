@@ -83,6 +83,7 @@ final class WaveformCharts {
             }
         }
         plot.addAnnotation(new ScaleBarAnnotation(unit, bench));
+        withRenderer(plot);
         JFreeChart chart = new JFreeChart(null, ChartStyle.labelFont(), plot, true);
         placeLegend(chart);
         ChartStyle.apply(chart, theme);
@@ -131,6 +132,8 @@ final class WaveformCharts {
             gfp.setRenderer(i, lineRenderer(theme.wave(w.entry().colourIndex()), ChartStyle.WAVE));
             i++;
         }
+        withRenderer(all);
+        withRenderer(gfp);
         combined.add(all, 3);
         combined.add(gfp, 1);
         JFreeChart chart = new JFreeChart(null, ChartStyle.labelFont(), combined, true);
@@ -139,6 +142,13 @@ final class WaveformCharts {
         TimeChartPanel.Probe probe = (t, v, p) -> p == all ? nearestChannel(bench, map, t, v)
                 : nearestGfp(bench, averages, t, v);
         return new Built(chart, probe);
+    }
+
+    /** An empty plot (no wave shown) still needs a renderer: JFreeChart draws its zero line with it. */
+    private static void withRenderer(XYPlot plot) {
+        if (plot.getRenderer() == null) {
+            plot.setRenderer(new XYLineAndShapeRenderer(true, false));
+        }
     }
 
     private static List<Averages.WaveAverage> shownOf(Workbench bench, Averages averages) {
