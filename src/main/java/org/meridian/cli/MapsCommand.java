@@ -99,6 +99,9 @@ final class MapsCommand implements Callable<Integer> {
     @Mixin
     SplineOptions spline;
 
+    @Mixin
+    ProcessingOptions.WithBaseline processing;
+
     @Override
     public Integer call() {
         ExportFormat format = ExportFormat.of(output);
@@ -111,7 +114,7 @@ final class MapsCommand implements Callable<Integer> {
                 .withHighlighted(highlight).withContours(!noContours);
         MapExtent mapExtent = MapExtent.parse(extent);
 
-        Study in = StudyLoader.load(study);
+        Study in = processing.apply(StudyLoader.load(study), spec.commandLine().getOut());
         Waveforms average = grandAverage(in, condition);
         MapMaker maker = MapMaker.of(in.montage(), spline.parameters(), csd ? Quantity.CSD : Quantity.POTENTIAL,
                 mapExtent, resolution);

@@ -23,6 +23,7 @@ import org.meridian.signal.GrandAverage;
 import org.meridian.signal.LateralisedWave;
 import org.meridian.signal.TimeWindow;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -97,8 +98,11 @@ final class MeasureCommand implements Callable<Integer> {
     List<String> exclude = new ArrayList<>();
 
     @Option(names = "--baseline", paramLabel = "A:B|pre",
-            description = "Subtract each channel's mean over this window first ('pre': every sample before 0 ms); default: none.")
+            description = "Subtract each channel's mean over this window, after any filter ('pre': every sample before 0 ms); default: none.")
     String baseline;
+
+    @Mixin
+    ProcessingOptions processing;
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write here instead of to standard output.")
     Path output;
@@ -121,7 +125,7 @@ final class MeasureCommand implements Callable<Integer> {
         }
         channels.forEach(request::channel);
 
-        Study loaded = StudyLoader.load(study);
+        Study loaded = processing.apply(StudyLoader.load(study), null);
         Study data = baseline == null ? loaded : withBaseline(loaded);
         for (ConditionWave c : conditionWaves(data)) {
             request.condition(c);
@@ -129,9 +133,9 @@ final class MeasureCommand implements Callable<Integer> {
         MeasureTable table = Measurement.run(data, OptionErrors.about("--measure", request::build));
 
         if (output == null) {
-            spec.commandLine().getOut().print(table.toTsv());
+            spec.commandLine().getOut().print(processing.commentLine(baseline) + table.toTsv());
         } else {
-            AtomicFiles.writeString(output, table.toTsv());
+            AtomicFiles.writeString(output, processing.commentLine(baseline) + table.toTsv());
         }
         printWarnings(table, spec.commandLine().getErr());
         return Main.EXIT_OK;

@@ -69,6 +69,9 @@ final class SpanCommand implements Callable<Integer> {
     @Mixin
     SplineOptions spline;
 
+    @Mixin
+    ProcessingOptions.WithBaseline processing;
+
     @Option(names = "--permutations", paramLabel = "N", defaultValue = "5000",
             description = "Random sign patterns when there are more than 16 participants "
                     + "(default: ${DEFAULT-VALUE}); up to 16 every pattern is used.")
@@ -113,7 +116,7 @@ final class SpanCommand implements Callable<Integer> {
         if (referenceTime != null) {
             settings = settings.withReferenceMs(referenceTime);
         }
-        Study s = StudyLoader.load(study);
+        Study s = processing.apply(StudyLoader.load(study), spec.commandLine().getErr());
         ConditionExpression expression = OptionErrors.about("--condition", () -> ConditionExpression.parse(condition, s));
         SpanReport report = SpanAnalysis.run(s, expression.name(),
                 p -> expression.forParticipant(s, p), settings, Progress.NONE);

@@ -82,8 +82,17 @@ public final class FigureContent {
         return mapScales;
     }
 
-    /** Computes the figure's content. */
-    public static FigureContent of(FigureSpec spec, Study study) {
+    /**
+     * Computes the figure's content: the spec's processing first, on every participant ×
+     * condition average, then every wave, band and map from the processed study.
+     */
+    public static FigureContent of(FigureSpec spec, Study loaded) {
+        Study study;
+        try {
+            study = spec.processingValue().apply(loaded);
+        } catch (BadInputException e) {
+            throw new BadInputException("processing: " + e.getMessage(), e);
+        }
         for (String name : spec.excludedParticipants()) {
             if (study.participantIndex(name) < 0) {
                 throw new BadInputException("excluded_participants: " + study.name() + " has no participant " + name

@@ -15,17 +15,57 @@ import org.meridian.maps.Drawing;
  * drawing depends only on the spec and the data, so the window's preview and every export show
  * the same thing, and SVG output is the same bytes wherever it is made. In SVG each panel is a
  * group with id {@code panel-N} (N from 1 in reading order) and class {@code waveform-panel},
- * {@code map-strip}, {@code colour-bar} or {@code span-trace}. Immutable.
+ * {@code map-strip}, {@code colour-bar} or {@code span-trace}; the processing caption, when
+ * there is one, is the group {@code caption}. Immutable.
  */
 public final class FigureDrawing implements Drawing {
     private final FigureContent content;
     private final FigureLayout layout;
     private final FigureStyle style;
+    private final Map<Integer, Legend> legends = new HashMap<>();
+    private final Map<Integer, Integer> bandLines = new HashMap<>();
+    private final WaveScales waveScales;
+    private final WaveScales gfpScales;
 
     public FigureDrawing(FigureContent content) {
         this.content = content;
         this.style = FigureStyle.of(content.spec());
-        this.layout = FigureLayout.of(content.spec(), style);
+        double colourBar = colourBarWidthMm();
+        FigureLayout first = FigureLayout.of(content.spec(), style, colourBar, new double[content.spec().rows().size()]);
+        placeLegends(first);
+        // legend lines below a title take their height from the plots: give it back to the row
+        double[] extra = new double[content.spec().rows().size()];
+        bandLines.forEach((row, lines) -> extra[row] = (lines - 1) * FigureStyle.lineHeight(style.small())
+                / ExportFormat.PT_PER_MM);
+        this.layout = FigureLayout.of(content.spec(), style, colourBar, extra);
+        WaveScales[] fitted = fitAxes();
+        this.waveScales = fitted[0];
+        this.gfpScales = fitted[1];
+    }
+
+    /** Lays out every waveform and span-trace legend (they depend only on the panels' widths). */
+    private void placeLegends(FigureLayout at) {
+        String polarityHolder = polarityHolder();
+        for (Placed p : at.placed()) {
+            PanelContent.Waveforms w = waves(content.panels().get(p.index()));
+            if (w != null) {
+                String note = ("panel-" + (p.index() + 1)).equals(polarityHolder)
+                        ? "(" + content.waveScales().polarity().words() + ")" : null;
+                Legend legend = Legend.of(w, p.letter(), note, p.boundsPt().getWidth(), style);
+                legends.put(p.index(), legend);
+                bandLines.merge(p.row(), legend.bandLines(), Math::max);
+            }
+        }
+    }
+
+    /** The waveform axes as drawn (tick steps fitted to the panels' size), or null. */
+    public WaveScales waveScales() {
+        return waveScales;
+    }
+
+    /** The span-trace axes as drawn, or null. */
+    public WaveScales gfpScales() {
+        return gfpScales;
     }
 
     public FigureLayout layout() {
@@ -63,6 +103,12 @@ public final class FigureDrawing implements Drawing {
             double heightPt = layout.heightMm() * ExportFormat.PT_PER_MM;
             g.scale(bounds.getWidth() / widthPt, bounds.getHeight() / heightPt);
             drawPanels(g);
+            if (!layout.caption().isEmpty()) {
+                SvgGroups.begin(g, "caption", "caption");
+                Caption.draw(g, FigureLayout.MARGIN_MM * ExportFormat.PT_PER_MM,
+                        layout.captionTopMm() * ExportFormat.PT_PER_MM, layout.caption(), style);
+                SvgGroups.end(g);
+            }
         } finally {
             g.dispose();
         }
@@ -70,24 +116,22 @@ public final class FigureDrawing implements Drawing {
 
     private void drawPanels(Graphics2D g) {
         Map<Integer, Double> mapSide = mapSides();
-        String polarityHolder = polarityHolder();
         Map<Integer, Boolean> rowHasAxisLabel = new HashMap<>();
-        Map<Integer, Integer> legendLines = legendLines(g, polarityHolder);
+        float opacity = content.spec().intervals().opacity().floatValue();
         for (Placed p : layout.placed()) {
             Rectangle2D b = p.boundsPt();
             PanelContent c = content.panels().get(p.index());
             String id = "panel-" + (p.index() + 1);
             if (c instanceof PanelContent.Waveforms w) {
                 boolean axisLabel = rowHasAxisLabel.putIfAbsent(p.row(), true) == null;
-                String note = id.equals(polarityHolder) ? "(" + content.waveScales().polarity().words() + ")" : null;
                 SvgGroups.begin(g, id, "waveform-panel");
-                WaveformPainter.draw(g, b, w, content.waveScales(), style, p.letter(), axisLabel, note,
-                        legendLines.get(p.row()), content.spec().intervals().opacity().floatValue());
+                WaveformPainter.draw(g, b, w, waveScales, style, p.letter(), axisLabel, legends.get(p.index()),
+                        bandLines.get(p.row()), opacity);
                 SvgGroups.end(g);
             } else if (c instanceof PanelContent.SpanTrace t) {
                 SvgGroups.begin(g, id, "span-trace");
-                WaveformPainter.draw(g, b, t.asWaveforms(), content.gfpScales(), style, p.letter(), true, null,
-                        legendLines.getOrDefault(p.row(), 1), content.spec().intervals().opacity().floatValue());
+                WaveformPainter.draw(g, b, t.asWaveforms(), gfpScales, style, p.letter(), true,
+                        legends.get(p.index()), bandLines.get(p.row()), opacity);
                 SvgGroups.end(g);
             } else if (c instanceof PanelContent.MapStrip m) {
                 SvgGroups.begin(g, id, "map-strip");
@@ -103,21 +147,71 @@ public final class FigureDrawing implements Drawing {
         }
     }
 
-    /** Per row of waveform panels: 2 when some legend of the row needs a line of its own, else 1. */
-    private Map<Integer, Integer> legendLines(Graphics2D g, String polarityHolder) {
-        Map<Integer, Integer> out = new HashMap<>();
+    private static PanelContent.Waveforms waves(PanelContent c) {
+        return c instanceof PanelContent.Waveforms w ? w : c instanceof PanelContent.SpanTrace t ? t.asWaveforms() : null;
+    }
+
+    /**
+     * The waveform and span-trace axes with tick steps the panels have room for ({@link AxisFit}):
+     * amplitude steps from the shortest plot of each kind, one time step for both from the
+     * narrowest plot.
+     */
+    private WaveScales[] fitAxes() {
+        WaveScales waves = content.waveScales();
+        WaveScales gfp = content.gfpScales();
+        double wavesHeight = Double.POSITIVE_INFINITY;
+        double gfpHeight = Double.POSITIVE_INFINITY;
         for (Placed p : layout.placed()) {
             PanelContent c = content.panels().get(p.index());
-            PanelContent.Waveforms w = c instanceof PanelContent.Waveforms waves ? waves
-                    : c instanceof PanelContent.SpanTrace t ? t.asWaveforms() : null;
-            if (w != null) {
-                String id = "panel-" + (p.index() + 1);
-                String note = id.equals(polarityHolder) ? "(" + content.waveScales().polarity().words() + ")" : null;
-                int lines = WaveformPainter.legendFitsBesideTitle(g, p.boundsPt(), w, p.letter(), note, style) ? 1 : 2;
-                out.merge(p.row(), lines, Math::max);
+            Rectangle2D b = p.boundsPt();
+            double h = bandLines.containsKey(p.row())
+                    ? WaveformPainter.plotHeight(b, style, bandLines.get(p.row())) : Double.POSITIVE_INFINITY;
+            if (c instanceof PanelContent.Waveforms) {
+                wavesHeight = Math.min(wavesHeight, h);
+            } else if (c instanceof PanelContent.SpanTrace) {
+                gfpHeight = Math.min(gfpHeight, h);
             }
         }
-        return out;
+        var axes = content.spec().waveforms();
+        if (waves != null) {
+            waves = AxisFit.amplitude(waves, axes.amplitudeStep() != null, axes.amplitude() != null, false,
+                    wavesHeight, style);
+            waves = AxisFit.label(waves, wavesHeight + 4, style);
+        }
+        if (gfp != null) {
+            gfp = AxisFit.label(AxisFit.amplitude(gfp, false, false, true, gfpHeight, style), gfpHeight + 4, style);
+        }
+        double step = 0;
+        for (Placed p : layout.placed()) {
+            PanelContent c = content.panels().get(p.index());
+            WaveScales s = c instanceof PanelContent.Waveforms ? waves : c instanceof PanelContent.SpanTrace ? gfp : null;
+            if (s != null) {
+                double width = WaveformPainter.plotWidth(p.boundsPt(), s, style);
+                step = Math.max(step, AxisFit.timeStep(s, axes.timeStepMs() != null, width, style));
+            }
+        }
+        return new WaveScales[] {waves == null ? null : waves.withTimeStep(step),
+            gfp == null ? null : gfp.withTimeStep(step)};
+    }
+
+    /**
+     * The least width of the colour bar's panel, in mm, so that its tick labels and its unit fit
+     * beside and above the bar as {@code maps.ColourBar} draws them (bar 0.3 font sizes in, 1.3
+     * wide, labels 0.55 beyond it); 0 without maps.
+     */
+    private double colourBarWidthMm() {
+        MapScales scales = content.mapScales();
+        if (scales == null) {
+            return 0;
+        }
+        java.awt.Font font = style.small();
+        double widest = 0;
+        for (double tick : scales.limits().ticks()) {
+            widest = Math.max(widest, TextMeasure.width(scales.limits().format(tick), font));
+        }
+        double em = font.getSize2D();
+        double pt = Math.max(TextMeasure.width(scales.unitLabel(), font), (0.3 + 1.3 + 0.55) * em + widest) + 1;
+        return pt / ExportFormat.PT_PER_MM;
     }
 
     /** The map side of each row holding map strips: the smallest that every strip of the row fits. */

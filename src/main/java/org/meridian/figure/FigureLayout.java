@@ -19,7 +19,8 @@ import org.meridian.figure.spec.WaveformPanel;
  * the tallest of its panels' — a waveform or span-trace panel 0.75 × its width (30–60 mm), a map strip its
  * maps' side plus a title line and a time line, a colour bar alone 30 mm. When the spec fixes the
  * figure's height, the rows are scaled to fill it. Panels are lettered A, B, C … in reading
- * order (colour bars excepted). Immutable.
+ * order (colour bars excepted). When the spec processes the data, a caption saying how
+ * ({@link Caption}) runs under the rows, wrapped to the figure's width. Immutable.
  */
 public final class FigureLayout {
     public static final double MARGIN_MM = 1;
@@ -27,6 +28,8 @@ public final class FigureLayout {
     /** Gap between the maps of a strip. */
     public static final double MAP_GAP_MM = 1.5;
     private static final double PT_TO_MM = 25.4 / 72;
+    /** Space between the last row and the caption. */
+    private static final double CAPTION_GAP_MM = 1.5;
 
     /** One panel at its place. */
     public record Placed(PanelSpec panel, int index, int row, Rectangle2D boundsMm, String letter) {
@@ -41,14 +44,29 @@ public final class FigureLayout {
     private final double widthMm;
     private final double heightMm;
     private final List<Placed> placed;
+    private final List<String> caption;
+    private final double captionTopMm;
 
-    private FigureLayout(double widthMm, double heightMm, List<Placed> placed) {
+    private FigureLayout(double widthMm, double heightMm, List<Placed> placed, List<String> caption,
+            double captionTopMm) {
         this.widthMm = widthMm;
         this.heightMm = heightMm;
         this.placed = List.copyOf(placed);
+        this.caption = List.copyOf(caption);
+        this.captionTopMm = captionTopMm;
     }
 
     public static FigureLayout of(FigureSpec spec, FigureStyle style) {
+        return of(spec, style, 0, new double[spec.rows().size()]);
+    }
+
+    /**
+     * @param colourBarMm the least width a colour bar panel needs for its labels (mm); its
+     *                    neighbours in the row give up the difference
+     * @param extraMm     per row, height to add to its natural height (e.g. for legend lines
+     *                    that take room from the plots); rows with a fixed height ignore it
+     */
+    public static FigureLayout of(FigureSpec spec, FigureStyle style, double colourBarMm, double[] extraMm) {
         double width = spec.size().width().mm();
         double inner = width - 2 * MARGIN_MM;
         List<double[]> widths = new ArrayList<>();
@@ -56,14 +74,17 @@ public final class FigureLayout {
         double natural = 0;
         for (int r = 0; r < heights.length; r++) {
             PanelRow row = spec.rows().get(r);
-            double[] w = panelWidths(row, inner);
+            double[] w = panelWidths(row, inner, colourBarMm);
             widths.add(w);
-            double h = row.heightMm() != null ? row.heightMm() : naturalHeight(row, w, style);
+            double h = row.heightMm() != null ? row.heightMm() : naturalHeight(row, w, style) + extraMm[r];
             heights[r] = h;
             natural += h;
         }
+        List<String> caption = Caption.wrap(Caption.text(spec), style.small(), inner / PT_TO_MM);
+        double captionMm = caption.isEmpty() ? 0
+                : CAPTION_GAP_MM + caption.size() * FigureStyle.lineHeight(style.small()) * PT_TO_MM;
         double rowsSpace = spec.size().heightMm() != null
-                ? spec.size().heightMm() - 2 * MARGIN_MM - GAP_MM * (heights.length - 1) : natural;
+                ? spec.size().heightMm() - 2 * MARGIN_MM - GAP_MM * (heights.length - 1) - captionMm : natural;
         if (!(rowsSpace > heights.length * 5)) {
             throw new org.meridian.core.BadInputException("size.height_mm " + spec.size().heightMm()
                     + " leaves less than 5 mm for each of the " + heights.length + " rows");
@@ -86,8 +107,9 @@ public final class FigureLayout {
             }
             y += h + GAP_MM;
         }
-        double height = y - GAP_MM + MARGIN_MM;
-        return new FigureLayout(width, height, out);
+        double captionTop = y - GAP_MM + CAPTION_GAP_MM;
+        double height = y - GAP_MM + captionMm + MARGIN_MM;
+        return new FigureLayout(width, height, out, caption, captionTop);
     }
 
     public double widthMm() {
@@ -102,7 +124,17 @@ public final class FigureLayout {
         return placed;
     }
 
-    private static double[] panelWidths(PanelRow row, double inner) {
+    /** The caption's lines under the panels (none when the data are shown as loaded). */
+    public List<String> caption() {
+        return caption;
+    }
+
+    /** The top of the caption's first line, in mm from the top. */
+    public double captionTopMm() {
+        return captionTopMm;
+    }
+
+    private static double[] panelWidths(PanelRow row, double inner, double colourBarMm) {
         List<PanelSpec> panels = row.panels();
         double share = 0;
         for (PanelSpec p : panels) {
@@ -114,8 +146,23 @@ public final class FigureLayout {
                     + " panels does not fit the figure's width");
         }
         double[] w = new double[panels.size()];
+        double barsExtra = 0;
+        double othersShare = 0;
         for (int i = 0; i < w.length; i++) {
             w[i] = free * panels.get(i).width() / share;
+            if (panels.get(i) instanceof ColourBarPanel && w[i] < colourBarMm) {
+                barsExtra += colourBarMm - w[i];
+                w[i] = colourBarMm;
+            } else {
+                othersShare += panels.get(i).width();
+            }
+        }
+        if (barsExtra > 0 && othersShare > 0) {
+            for (int i = 0; i < w.length; i++) {
+                if (!(panels.get(i) instanceof ColourBarPanel && w[i] == colourBarMm)) {
+                    w[i] -= barsExtra * panels.get(i).width() / othersShare;
+                }
+            }
         }
         return w;
     }

@@ -32,38 +32,37 @@ final class FigureScales {
         double lo;
         double hi;
         double step;
-        if (axes.amplitude() != null) {
-            lo = axes.amplitude().get(0);
-            hi = axes.amplitude().get(1);
-            step = axes.amplitudeStep() != null ? axes.amplitudeStep() : amplitudeStep(lo, hi);
-        } else {
-            double min = 0;
-            double max = 0;
-            for (PanelContent c : panels) {
-                if (c instanceof PanelContent.Waveforms w) {
-                    for (WaveTrace t : w.traces()) {
-                        for (double[] series : new double[][] {t.mean(), t.lower(), t.upper()}) {
-                            if (series != null) {
-                                for (double v : series) {
-                                    min = Math.min(min, v);
-                                    max = Math.max(max, v);
-                                }
+        double min = 0;
+        double max = 0;
+        for (PanelContent c : panels) {
+            if (c instanceof PanelContent.Waveforms w) {
+                for (WaveTrace t : w.traces()) {
+                    for (double[] series : new double[][] {t.mean(), t.lower(), t.upper()}) {
+                        if (series != null) {
+                            for (double v : series) {
+                                min = Math.min(min, v);
+                                max = Math.max(max, v);
                             }
                         }
                     }
                 }
             }
+        }
+        if (axes.amplitude() != null) {
+            lo = axes.amplitude().get(0);
+            hi = axes.amplitude().get(1);
+            step = axes.amplitudeStep() != null ? axes.amplitudeStep() : amplitudeStep(lo, hi);
+        } else {
             step = axes.amplitudeStep() != null ? axes.amplitudeStep() : amplitudeStep(min, max);
-            lo = Math.floor(min / step - 1e-9) * step;
-            hi = Math.ceil(max / step + 1e-9) * step;
-            if (hi == lo) {
-                hi = lo + step;
-            }
+            double[] range = roundedRange(min, max, step);
+            lo = range[0];
+            hi = range[1];
         }
         String unit = study.unit().symbol();
         String label = axes.amplitudeLabel().contains("(") || axes.amplitudeLabel().contains(unit)
                 ? axes.amplitudeLabel() : axes.amplitudeLabel() + " (" + unit + ")";
-        return new WaveScales(t0, t1, timeStep, lo, hi, step, axes.timeLabel(), label, spec.polarity(), marks);
+        return new WaveScales(t0, t1, timeStep, lo, hi, step, axes.timeLabel(), label, spec.polarity(), marks,
+                min, max);
     }
 
     static WaveScales gfp(FigureSpec spec, Study study, List<PanelContent> panels, double t0,
@@ -82,7 +81,23 @@ final class FigureScales {
         double hi = Math.max(step, Math.ceil(max / step - 1e-9) * step);
         WaveScales waves = waves(spec, study, List.of(), t0, t1, marks);
         return new WaveScales(t0, t1, waves.timeStepMs(), 0, hi, step, waves.timeLabel(),
-                "GFP (" + study.unit().symbol() + ")", Polarity.POSITIVE_UP, marks);
+                "GFP (" + study.unit().symbol() + ")", Polarity.POSITIVE_UP, marks, 0, max);
+    }
+
+    /** [min, max] widened to whole steps (at least one step). */
+    static double[] roundedRange(double min, double max, double step) {
+        double lo = Math.floor(min / step - 1e-9) * step;
+        double hi = Math.ceil(max / step + 1e-9) * step;
+        if (hi == lo) {
+            hi = lo + step;
+        }
+        return new double[] {lo, hi};
+    }
+
+    /** The next coarser amplitude step: 1, 2, 5 × a power of ten (2.5 is skipped: its ticks need a decimal). */
+    static double nextAmplitudeStep(double step) {
+        double next = RoundNumbers.next(step);
+        return Math.abs(next / Math.pow(10, Math.floor(Math.log10(next))) - 2.5) < 1e-9 ? RoundNumbers.next(next) : next;
     }
 
     /**

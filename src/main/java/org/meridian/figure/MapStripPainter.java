@@ -67,9 +67,41 @@ final class MapStripPainter {
     }
 
     /**
+     * Where a highlighted electrode's name goes: right of its ring, else left, above or below,
+     * whichever first keeps clear of the names already placed (neighbouring electrodes such as
+     * FCz, Cz and CPz lie closer than a line of text on a small map). Returns the baseline start
+     * and adds the name's ink box to {@code taken}.
+     */
+    private static Point2D labelPlace(Graphics2D g, String label, Point2D dot, double ring, List<Rectangle2D> taken) {
+        Rectangle2D ink = g.getFont().createGlyphVector(g.getFontRenderContext(), label).getVisualBounds();
+        double w = ink.getWidth();
+        double h = ink.getHeight();
+        double gap = 0.8;
+        double middle = dot.getY() + h / 2;
+        Point2D[] candidates = {
+            new Point2D.Double(dot.getX() + ring + gap, middle),
+            new Point2D.Double(dot.getX() - ring - gap - w, middle),
+            new Point2D.Double(dot.getX() - w / 2, dot.getY() - ring - gap),
+            new Point2D.Double(dot.getX() - w / 2, dot.getY() + ring + gap + h)};
+        Point2D chosen = candidates[0];
+        Rectangle2D chosenBox = null;
+        for (Point2D c : candidates) {
+            Rectangle2D box = new Rectangle2D.Double(c.getX() + ink.getX(), c.getY() + ink.getY(), w, h);
+            if (taken.stream().noneMatch(box::intersects)) {
+                chosen = c;
+                chosenBox = box;
+                break;
+            }
+        }
+        taken.add(chosenBox != null ? chosenBox
+                : new Rectangle2D.Double(chosen.getX() + ink.getX(), chosen.getY() + ink.getY(), w, h));
+        return chosen;
+    }
+
+    /**
      * Small electrode dots (0.9 pt across, whatever the map's size: the renderer's markers grow
      * with its line width and would crowd a 64-channel map at print size), and the highlighted
-     * electrodes as white dots ringed in ink, named to their right.
+     * electrodes as white dots ringed in ink, named beside them ({@link #labelPlace}).
      */
     private static void drawElectrodes(Graphics2D target, Rectangle2D square, MapLayout layout,
             Set<String> highlight, boolean markers, FigureStyle style) {
@@ -81,6 +113,7 @@ final class MapStripPainter {
             FontMetrics fm = g.getFontMetrics();
             double r = 0.45;
             double ring = 1.6;
+            List<Rectangle2D> taken = new java.util.ArrayList<>();
             for (int i = 0; i < layout.electrodeCount(); i++) {
                 String label = layout.labels().get(i);
                 boolean marked = highlight.stream().anyMatch(label::equalsIgnoreCase);
@@ -93,7 +126,8 @@ final class MapStripPainter {
                     g.setColor(FigureStyle.INK);
                     g.setStroke(new java.awt.BasicStroke(0.5f));
                     g.draw(dot);
-                    g.drawString(label, (float) (d.getX() + ring + 0.8), (float) (d.getY() + fm.getAscent() * 0.35));
+                    Point2D at = labelPlace(g, label, d, ring, taken);
+                    g.drawString(label, (float) at.getX(), (float) at.getY());
                 } else if (markers) {
                     g.setColor(FigureStyle.INK);
                     g.fill(new Ellipse2D.Double(d.getX() - r, d.getY() - r, 2 * r, 2 * r));

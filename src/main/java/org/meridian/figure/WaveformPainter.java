@@ -1,7 +1,5 @@
 package org.meridian.figure;
 
-import java.awt.Font;
-import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
 import java.util.List;
@@ -25,7 +23,7 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 
 /**
  * Draws a waveform panel: a title band (panel letter, channel or region, and, where asked, the
- * legend) above a JFreeChart plot drawn straight into the figure's {@code Graphics2D}, so waves
+ * {@link Legend}) above a JFreeChart plot drawn straight into the figure's {@code Graphics2D}, so waves
  * and maps share one vector drawing. The plot has no frame, background or grid: a time axis and
  * an amplitude axis with outward ticks at round steps and labelled units, a zero line at 0 µV and
  * one at 0 ms, a light band where the maps are taken, interval bands under the waves. Every panel
@@ -34,7 +32,6 @@ import org.jfree.data.xy.YIntervalSeriesCollection;
 final class WaveformPainter {
     private static final double TICK_PT = 2.5;
     private static final double TICK_GAP_PT = 1.5;
-    private static final double LEGEND_LINE_PT = 10;
     private static final double TOP_INSET_PT = 2;
 
     private WaveformPainter() {
@@ -42,23 +39,19 @@ final class WaveformPainter {
 
     /**
      * @param axisLabel whether this panel prints the amplitude axis label (the first of its row)
-     * @param polarityNote the polarity statement to print with the legend, or null
-     * @param legendLines 1 when the legend shares the title's line, 2 when it goes on a line of
-     *        its own below (the same for every waveform panel of a row, so their plots line up)
+     * @param legend the panel's legend (with the polarity note where it carries it)
+     * @param bandLines lines of text in the top band: the same for every waveform panel of a row
+     *        (the most any of their legends needs), so their plots line up
      */
     static void draw(Graphics2D g, Rectangle2D bounds, PanelContent.Waveforms panel, WaveScales scales,
-            FigureStyle style, String letter, boolean axisLabel, String polarityNote, int legendLines,
+            FigureStyle style, String letter, boolean axisLabel, Legend legend, int bandLines,
             float bandOpacity) {
-        double band = TitleBand.height(style) + (legendLines - 1) * FigureStyle.lineHeight(style.small());
+        double band = bandHeight(style, bandLines);
         TitleBand.draw(g, bounds, letter, panel.title(), style);
-        if (panel.legend() || polarityNote != null) {
-            double baseline = bounds.getY() + (legendLines == 1 ? TitleBand.baseline(style)
-                    : TitleBand.height(style) + style.small().getSize2D());
-            drawLegend(g, bounds, baseline, panel.legend() ? panel.traces() : List.of(), polarityNote, style);
-        }
+        legend.draw(g, bounds);
         Rectangle2D chartArea = new Rectangle2D.Double(bounds.getX(), bounds.getY() + band, bounds.getWidth(),
                 bounds.getHeight() - band);
-        JFreeChart chart = new JFreeChart(null, null, plot(g, panel, scales, style, axisLabel, bandOpacity), false);
+        JFreeChart chart = new JFreeChart(null, null, plot(panel, scales, style, bandOpacity), false);
         chart.setBackgroundPaint(null);
         chart.setBorderVisible(false);
         chart.setPadding(RectangleInsets.ZERO_INSETS);
@@ -75,6 +68,21 @@ final class WaveformPainter {
         }
     }
 
+    /** The height of a panel's top band (title, and legend lines below it), in points. */
+    static double bandHeight(FigureStyle style, int bandLines) {
+        return TitleBand.height(style) + (bandLines - 1) * FigureStyle.lineHeight(style.small());
+    }
+
+    /** The height of the plot itself in a panel, in points. */
+    static double plotHeight(Rectangle2D bounds, FigureStyle style, int bandLines) {
+        return bounds.getHeight() - bandHeight(style, bandLines) - TOP_INSET_PT - bottomSpace(style);
+    }
+
+    /** The width of the plot itself in a panel, in points. */
+    static double plotWidth(Rectangle2D bounds, WaveScales scales, FigureStyle style) {
+        return bounds.getWidth() - leftSpace(scales, style) - rightInset(scales, style);
+    }
+
     /**
      * The amplitude axis label, turned a quarter left and centred on the plot's height. Drawn
      * here rather than by the chart, whose rotated labels take a glyph-outline path that PDF
@@ -85,50 +93,36 @@ final class WaveformPainter {
         try {
             g.setFont(style.label());
             g.setColor(FigureStyle.INK);
-            FontMetrics fm = g.getFontMetrics();
             double plotTop = chartArea.getY() + TOP_INSET_PT;
-            double plotBottom = chartArea.getMaxY() - bottomSpace(g, style);
+            double plotBottom = chartArea.getMaxY() - bottomSpace(style);
             double centreY = (plotTop + plotBottom) / 2;
-            double x = chartArea.getX() + fm.getAscent();
+            double x = chartArea.getX() + TextMeasure.ascent(style.label());
             g.rotate(-Math.PI / 2, x, centreY);
-            g.drawString(label, (float) (x - fm.stringWidth(label) / 2.0), (float) centreY);
+            g.drawString(label, (float) (x - TextMeasure.width(label, style.label()) / 2.0), (float) centreY);
         } finally {
             g.dispose();
         }
     }
 
-    /** Whether the panel's legend fits on the title's line, beside the letter and title. */
-    static boolean legendFitsBesideTitle(Graphics2D g, Rectangle2D bounds, PanelContent.Waveforms panel,
-            String letter, String polarityNote, FigureStyle style) {
-        if (!panel.legend() && polarityNote == null) {
-            return true;
-        }
-        double title = g.getFontMetrics(style.letter()).stringWidth(letter) + style.letter().getSize2D()
-                + g.getFontMetrics(style.label()).stringWidth(panel.title());
-        double legend = legendWidth(g, panel.legend() ? panel.traces() : List.of(), polarityNote, style);
-        return title + legend + style.small().getSize2D() <= bounds.getWidth();
-    }
-
     /** The room left of the plot for ticks, tick labels and the axis label (points). */
-    static double leftSpace(Graphics2D g, WaveScales scales, FigureStyle style) {
-        FontMetrics fm = g.getFontMetrics(style.small());
+    static double leftSpace(WaveScales scales, FigureStyle style) {
         TickFormat format = new TickFormat(scales.amplitudeStep());
         double widest = 0;
         for (double v = scales.amplitudeFrom(); v <= scales.amplitudeTo() + 1e-9 * scales.amplitudeStep();
                 v += scales.amplitudeStep()) {
-            widest = Math.max(widest, fm.stringWidth(format.format(v)));
+            widest = Math.max(widest, TextMeasure.width(format.format(v), style.small()));
         }
-        return TICK_PT + TICK_GAP_PT + widest + TICK_GAP_PT + g.getFontMetrics(style.label()).getHeight() + 1;
+        return TICK_PT + TICK_GAP_PT + widest + TICK_GAP_PT + TextMeasure.lineHeight(style.label()) + 1;
     }
 
     /** The room below the plot for ticks, tick labels and the axis label (points). */
-    static double bottomSpace(Graphics2D g, FigureStyle style) {
-        return TICK_PT + TICK_GAP_PT + g.getFontMetrics(style.small()).getHeight() + TICK_GAP_PT
-                + g.getFontMetrics(style.label()).getHeight();
+    static double bottomSpace(FigureStyle style) {
+        return TICK_PT + TICK_GAP_PT + TextMeasure.lineHeight(style.small()) + TICK_GAP_PT
+                + TextMeasure.lineHeight(style.label());
     }
 
-    private static XYPlot plot(Graphics2D g, PanelContent.Waveforms panel, WaveScales scales, FigureStyle style,
-            boolean axisLabel, float bandOpacity) {
+    private static XYPlot plot(PanelContent.Waveforms panel, WaveScales scales, FigureStyle style,
+            float bandOpacity) {
         NumberAxis time = axis(scales.timeLabel(), scales.timeFromMs(), scales.timeToMs(), scales.timeStepMs(), style);
         NumberAxis amplitude = axis(null, scales.amplitudeFrom(),
                 scales.amplitudeTo(), scales.amplitudeStep(), style);
@@ -157,12 +151,12 @@ final class WaveformPainter {
         plot.setDomainCrosshairVisible(false);
         plot.setRangeCrosshairVisible(false);
         plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
-        plot.setInsets(new RectangleInsets(TOP_INSET_PT, 0, 0, rightInset(g, scales, style)));
+        plot.setInsets(new RectangleInsets(TOP_INSET_PT, 0, 0, rightInset(scales, style)));
         AxisSpace left = new AxisSpace();
-        left.setLeft(leftSpace(g, scales, style));
+        left.setLeft(leftSpace(scales, style));
         plot.setFixedRangeAxisSpace(left);
         AxisSpace bottom = new AxisSpace();
-        bottom.setBottom(bottomSpace(g, style));
+        bottom.setBottom(bottomSpace(style));
         plot.setFixedDomainAxisSpace(bottom);
         for (double[] mark : scales.marksMs()) {
             IntervalMarker m = new IntervalMarker(mark[0], mark[1], FigureStyle.MARK);
@@ -179,9 +173,9 @@ final class WaveformPainter {
     }
 
     /** Room right of the plot for half the last time tick label, which is centred on the axis end. */
-    private static double rightInset(Graphics2D g, WaveScales scales, FigureStyle style) {
+    private static double rightInset(WaveScales scales, FigureStyle style) {
         double last = Math.floor(scales.timeToMs() / scales.timeStepMs() + 1e-9) * scales.timeStepMs();
-        double width = g.getFontMetrics(style.small()).stringWidth(new TickFormat(scales.timeStepMs()).format(last));
+        double width = TextMeasure.width(new TickFormat(scales.timeStepMs()).format(last), style.small());
         double tickX = (last - scales.timeFromMs()) / (scales.timeToMs() - scales.timeFromMs());
         return tickX > 0.97 ? width / 2 + 1 : 2;
     }
@@ -232,52 +226,5 @@ final class WaveformPainter {
             data.addSeries(s);
         }
         return data;
-    }
-
-    private static double legendWidth(Graphics2D g, List<WaveTrace> traces, String note, FigureStyle style) {
-        Font font = style.small();
-        FontMetrics fm = g.getFontMetrics(font);
-        double gap = font.getSize2D() * 0.35;
-        double spacing = font.getSize2D() * 1.1;
-        double width = 0;
-        for (WaveTrace t : traces) {
-            width += LEGEND_LINE_PT + gap + fm.stringWidth(t.label()) + spacing;
-        }
-        if (note != null) {
-            width += fm.stringWidth(note);
-        } else if (!traces.isEmpty()) {
-            width -= spacing;
-        }
-        return width;
-    }
-
-    /** The legend (and polarity note), right-aligned on a baseline. */
-    private static void drawLegend(Graphics2D target, Rectangle2D bounds, double baseline, List<WaveTrace> traces,
-            String note, FigureStyle style) {
-        Graphics2D g = (Graphics2D) target.create();
-        try {
-            Font font = style.small();
-            g.setFont(font);
-            FontMetrics fm = g.getFontMetrics();
-            double gap = font.getSize2D() * 0.35;
-            double spacing = font.getSize2D() * 1.1;
-            double x = bounds.getMaxX() - legendWidth(g, traces, note, style);
-            double lineY = baseline - fm.getAscent() * 0.35;
-            for (WaveTrace t : traces) {
-                g.setColor(t.colour());
-                g.setStroke(style.waveStroke(t.dashed()));
-                g.draw(new java.awt.geom.Line2D.Double(x, lineY, x + LEGEND_LINE_PT, lineY));
-                x += LEGEND_LINE_PT + gap;
-                g.setColor(FigureStyle.INK);
-                g.drawString(t.label(), (float) x, (float) baseline);
-                x += fm.stringWidth(t.label()) + spacing;
-            }
-            if (note != null) {
-                g.setColor(FigureStyle.INK);
-                g.drawString(note, (float) x, (float) baseline);
-            }
-        } finally {
-            g.dispose();
-        }
     }
 }

@@ -152,7 +152,8 @@ class MeasureCommandTest {
                 "--conditions", "rare - frequent", "--grand", "--baseline", "pre");
         assertThat(r.exitCode()).as(r.err()).isZero();
         Study demo = StudyLoader.load(Path.of("samples", "two-tone-listening"));
-        assertThat(r.out().lines().skip(1)).hasSize(2 * (demo.participants().size() + 1));
+        assertThat(r.out().lines().findFirst()).hasValue("# processing: baseline before 0 ms");
+        assertThat(r.out().lines().skip(2)).hasSize(2 * (demo.participants().size() + 1));
         // the rare tones' P3 makes the difference wave positive at Pz in the grand average
         String grandMean = r.out().lines().filter(l -> l.startsWith("grand\t") && l.contains("\tmean\t"))
                 .findFirst().orElseThrow();

@@ -16,10 +16,12 @@ import org.meridian.core.BadInputException;
  * @param version the spec format's version ({@value #VERSION})
  * @param letters whether panels get letters A, B, C … in reading order
  * @param excludedParticipants participants left out of every average and interval
+ * @param processing what is done to every participant's averages first (reference, filter,
+ *                   baseline); null or absent for nothing, which is also how "nothing" is written
  */
 @JsonInclude(JsonInclude.Include.NON_NULL)
 @JsonPropertyOrder({"version", "study", "size", "font", "lines", "polarity", "letters", "conditions",
-    "excluded_participants", "intervals", "waveforms", "maps", "rows"})
+    "excluded_participants", "processing", "intervals", "waveforms", "maps", "rows"})
 public record FigureSpec(@JsonProperty("version") Integer version,
         @JsonProperty("study") String study,
         @JsonProperty("size") FigureSize size,
@@ -29,6 +31,7 @@ public record FigureSpec(@JsonProperty("version") Integer version,
         @JsonProperty("letters") Boolean letters,
         @JsonProperty("conditions") List<ShownCondition> conditions,
         @JsonProperty("excluded_participants") List<String> excludedParticipants,
+        @JsonProperty("processing") ProcessingSpec processing,
         @JsonProperty("intervals") IntervalSpec intervals,
         @JsonProperty("waveforms") WaveformAxes waveforms,
         @JsonProperty("maps") MapSettings maps,
@@ -50,6 +53,7 @@ public record FigureSpec(@JsonProperty("version") Integer version,
         letters = letters == null || letters;
         conditions = withDefaults(conditions);
         excludedParticipants = excludedParticipants == null ? List.of() : List.copyOf(excludedParticipants);
+        processing = processing == null || processing.toProcessing().isNone() ? null : processing;
         intervals = intervals == null ? IntervalSpec.defaults() : intervals;
         waveforms = waveforms == null ? WaveformAxes.defaults() : waveforms;
         maps = maps == null ? MapSettings.defaults() : maps;
@@ -63,7 +67,18 @@ public record FigureSpec(@JsonProperty("version") Integer version,
     /** The same figure with another study path (e.g. made relative to where the spec is saved). */
     public FigureSpec withStudy(String newStudy) {
         return new FigureSpec(version, newStudy, size, font, lines, polarity, letters, conditions,
-                excludedParticipants, intervals, waveforms, maps, rows);
+                excludedParticipants, processing, intervals, waveforms, maps, rows);
+    }
+
+    /** The same figure with other processing (null or nothing for none). */
+    public FigureSpec withProcessing(ProcessingSpec newProcessing) {
+        return new FigureSpec(version, study, size, font, lines, polarity, letters, conditions,
+                excludedParticipants, newProcessing, intervals, waveforms, maps, rows);
+    }
+
+    /** The processing the spec asks for ({@code Processing.none()} when it has none). */
+    public org.meridian.signal.Processing processingValue() {
+        return processing == null ? org.meridian.signal.Processing.none() : processing.toProcessing();
     }
 
     /** Every panel in reading order. */
