@@ -6,15 +6,19 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.signal.ConditionWave;
 import org.meridian.signal.ConfidenceBand;
 import org.meridian.signal.GrandAverage;
+import org.meridian.signal.Processing;
 import org.meridian.span.FieldStatistics;
 
 /**
- * The derived data of the shown waves for one set of included participants, computed once off
- * the event thread and then only read: each wave's grand average, its interval band, the CSD of
+ * The derived data of the shown waves for one set of included participants and one processing
+ * of the participants' averages ({@link Processing}: applied to the study first, so that every
+ * grand average, band, CSD, GFP, measure and span view agrees), computed once off the event
+ * thread and then only read: the processed study, each wave's grand average, its interval band, the CSD of
  * the grand average at the electrodes, the GFP over the scalp field, and the largest absolute
  * value at the field's electrodes over all samples (for the automatic colour range: the map
  * interpolates between electrodes, so its values stay close to theirs, and any value beyond the
@@ -43,11 +47,18 @@ public final class Averages {
         }
     }
 
+    private final StudySession session;
+    private final Processing processing;
+    private final Study study;
     private final Set<String> excluded;
     private final IntervalKind intervals;
     private final Map<String, WaveAverage> waves;
 
-    private Averages(Set<String> excluded, IntervalKind intervals, Map<String, WaveAverage> waves) {
+    private Averages(StudySession session, Processing processing, Study study, Set<String> excluded,
+            IntervalKind intervals, Map<String, WaveAverage> waves) {
+        this.session = session;
+        this.processing = processing;
+        this.study = study;
         this.excluded = Set.copyOf(excluded);
         this.intervals = intervals;
         this.waves = Collections.unmodifiableMap(waves);
@@ -55,22 +66,33 @@ public final class Averages {
 
     /** Nothing computed yet. */
     public static Averages empty() {
-        return new Averages(Set.of(), IntervalKind.NONE, new LinkedHashMap<>());
+        return new Averages(null, Processing.none(), null, Set.of(), IntervalKind.NONE, new LinkedHashMap<>());
+    }
+
+    /** As {@link #compute(StudySession, Processing, Averages, List, Set, IntervalKind, Tasks.TaskProgress)} without processing. */
+    public static Averages compute(StudySession session, List<WaveEntry> shown, Set<String> excluded,
+            IntervalKind intervals, Tasks.TaskProgress progress) {
+        return compute(session, Processing.none(), null, shown, excluded, intervals, progress);
     }
 
     /**
      * Computes the grand averages of the given waves with the participants in {@code excluded}
-     * left out. Within-participant bands are formed over the shown loaded conditions together
-     * (when there are at least two); contrasts get their own t-interval.
+     * left out, from the study processed as asked (the processed study of {@code previous} is
+     * reused when it was made from the same session with the same processing). Within-participant
+     * bands are formed over the shown loaded conditions together (when there are at least two);
+     * contrasts get their own t-interval.
      */
-    public static Averages compute(StudySession session, List<WaveEntry> shown, Set<String> excluded,
-            IntervalKind intervals, Tasks.TaskProgress progress) {
-        Map<String, ConfidenceBand> bands = bands(session, shown, excluded, intervals);
+    public static Averages compute(StudySession session, Processing processing, Averages previous,
+            List<WaveEntry> shown, Set<String> excluded, IntervalKind intervals, Tasks.TaskProgress progress) {
+        Study study = previous != null && previous.session == session && previous.processing.equals(processing)
+                ? previous.study : processing.apply(session.study());
+        progress.checkCancelled();
+        Map<String, ConfidenceBand> bands = bands(study, shown, excluded, intervals);
         Map<String, WaveAverage> out = new LinkedHashMap<>();
         int done = 0;
         for (WaveEntry e : shown) {
             progress.checkCancelled();
-            Waveforms grand = GrandAverage.of(session.study(), e.wave(),
+            Waveforms grand = GrandAverage.of(study, e.wave(),
                     GrandAverage.Weighting.UNWEIGHTED, excluded);
             Waveforms field = grand.select(session.fieldChannels());
             Waveforms csd = session.hasCsd() ? session.csdOf(grand) : null;
@@ -80,7 +102,17 @@ public final class Averages {
                     csd == null ? null : gfp(csd), potMax, csdMax));
             progress.update(++done, shown.size());
         }
-        return new Averages(excluded, intervals, out);
+        return new Averages(session, processing, study, excluded, intervals, out);
+    }
+
+    /** The processing the averages were computed with. */
+    public Processing processing() {
+        return processing;
+    }
+
+    /** The study the averages were computed from (processed), or null before any. */
+    public Study study() {
+        return study;
     }
 
     public Set<String> excluded() {
@@ -105,10 +137,10 @@ public final class Averages {
         return waves.isEmpty();
     }
 
-    private static Map<String, ConfidenceBand> bands(StudySession session, List<WaveEntry> shown,
+    private static Map<String, ConfidenceBand> bands(Study study, List<WaveEntry> shown,
             Set<String> excluded, IntervalKind intervals) {
         Map<String, ConfidenceBand> out = new LinkedHashMap<>();
-        int included = session.study().participants().size() - excluded.size();
+        int included = study.participants().size() - excluded.size();
         if (intervals == IntervalKind.NONE || included < 2) {
             return out;
         }
@@ -119,13 +151,13 @@ public final class Averages {
             }
         }
         if (intervals == IntervalKind.WITHIN && within.size() >= 2) {
-            for (ConfidenceBand b : ConfidenceBand.withinParticipants(session.study(), within,
+            for (ConfidenceBand b : ConfidenceBand.withinParticipants(study, within,
                     ConfidenceBand.DEFAULT_LEVEL, excluded)) {
                 out.put(b.name(), b);
             }
         }
         for (WaveEntry e : shown) {
-            out.computeIfAbsent(e.name(), n -> ConfidenceBand.acrossParticipants(session.study(),
+            out.computeIfAbsent(e.name(), n -> ConfidenceBand.acrossParticipants(study,
                     e.wave(), ConfidenceBand.DEFAULT_LEVEL, excluded));
         }
         return out;

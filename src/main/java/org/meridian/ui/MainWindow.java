@@ -49,6 +49,7 @@ public final class MainWindow extends JFrame {
     private final JSplitPane right;
     private final Toolbar toolbar;
     private final MenuBar menus;
+    private ProcessingDialog processingDialog;
     private long openStartedNanos;
     private long lastOpenMillis = -1;
 
@@ -180,6 +181,15 @@ public final class MainWindow extends JFrame {
         next.applyTo(this);
         prefs.setTheme(next);
         bench.setTheme(next);
+    }
+
+    /** Opens the processing dialog (or brings the open one to the front). */
+    void openProcessing() {
+        if (processingDialog == null || !processingDialog.isDisplayable()) {
+            processingDialog = new ProcessingDialog(this, bench);
+        }
+        processingDialog.setVisible(true);
+        processingDialog.toFront();
     }
 
     void openFigureComposer() {

@@ -218,9 +218,10 @@ final class MeasuresPanel extends JPanel {
         String scopeText = Texts.window(s.windowStartMs(), s.windowEndMs()) + "  ·  " + channels;
         boolean withParticipants = participants.isSelected();
         Map<String, float[]> grand = grandSeries(averages, request);
+        Study study = bench.model().study();
         bench.tasks().submit("measures", "Measures",
-                p -> new Result(Measurement.run(session.study(), request),
-                        withParticipants ? participantSeries(session, request, grand) : grand,
+                p -> new Result(Measurement.run(study, request),
+                        withParticipants ? participantSeries(study, request, grand) : grand,
                         measures, units, withParticipants),
                 result -> {
                     last = result;
@@ -266,10 +267,9 @@ final class MeasuresPanel extends JPanel {
     }
 
     /** The grand average's waves and each included participant's (off the event thread). */
-    private static Map<String, float[]> participantSeries(StudySession session, MeasureRequest request,
+    private static Map<String, float[]> participantSeries(Study study, MeasureRequest request,
             Map<String, float[]> grand) {
         Map<String, float[]> out = new HashMap<>(grand);
-        Study study = session.study();
         for (ConditionWave wave : request.conditions()) {
             for (int p = 0; p < study.participants().size(); p++) {
                 String name = study.participants().get(p);

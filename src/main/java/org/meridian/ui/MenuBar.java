@@ -40,6 +40,7 @@ final class MenuBar extends JMenuBar {
 
         JMenu view = new JMenu("View");
         view.setMnemonic(KeyEvent.VK_V);
+        view.add(item("Processing…", "menu.processing", null, window::openProcessing));
         view.add(item("Switch light / dark theme", "menu.theme", null, window::toggleTheme));
         view.add(item("Potential / CSD  (key C)", "menu.quantity", null, window::toggleQuantity));
         view.add(item("Positive up / negative up", "menu.polarity", null,

@@ -177,8 +177,8 @@ final class ScalpLayoutView extends JComponent {
             slots = List.of();
             return;
         }
-        Montage montage = session.study().montage();
-        List<String> labels = session.study().channelLabels();
+        Montage montage = bench.model().study().montage();
+        List<String> labels = bench.model().study().channelLabels();
         List<double[]> plane = new ArrayList<>();
         List<String> placed = new ArrayList<>();
         List<String> loose = new ArrayList<>();

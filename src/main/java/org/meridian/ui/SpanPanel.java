@@ -150,7 +150,7 @@ final class SpanPanel extends JPanel {
         double end = s.windowEndMs();
         int maps = (Integer) count.getValue();
         scope.setText(w.name() + "  ·  " + Texts.window(start, end) + "  ·  " + q.word());
-        Study study = included(session.study(), s.excludedParticipants());
+        Study study = included(bench.model().study(), s.excludedParticipants());
         bench.tasks().submit("span", "Span view", p -> SpanData.compute(session, study, w, q, start, end, maps, p),
                 d -> {
                     data = d;
@@ -195,7 +195,7 @@ final class SpanPanel extends JPanel {
         if (session == null || e == null) {
             return;
         }
-        Study study = included(session.study(), s.excludedParticipants());
+        Study study = included(bench.model().study(), s.excludedParticipants());
         SpanSettings settings = SpanSettings.window(s.windowStartMs(), s.windowEndMs())
                 .withCsd(s.quantity() == MapQuantity.CSD)
                 .withPermutations((Integer) patterns.getValue(), SpanSettings.DEFAULT_SEED);

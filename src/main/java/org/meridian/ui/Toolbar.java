@@ -64,6 +64,13 @@ final class Toolbar extends JToolBar {
         add(polarity);
         addSeparator();
 
+        JButton processing = new JButton("Processing…");
+        processing.setName("toolbar.processing");
+        processing.setToolTipText("Reference, filter and baseline of every participant's averages");
+        processing.addActionListener(e -> window.openProcessing());
+        add(processing);
+        addSeparator();
+
         JButton figure = new JButton("Figure…");
         figure.setName("toolbar.figure");
         boolean composer = FigureComposer.find().isPresent();

@@ -14,7 +14,8 @@ import org.meridian.signal.ConditionWave;
  * waves the study panel lists (loaded conditions and the contrasts written so far), and the
  * {@link Averages} of the shown waves. It watches the {@link ViewState}: when the shown waves or
  * the included participants change it recomputes the averages in a background task and, when
- * they arrive, tells its listeners. Panels read from here and never compute grand averages
+ * they arrive, tells its listeners. The processing of the state ({@link ViewState#processing()})
+ * is applied to the study in the same background task, before any average. Panels read from here and never compute grand averages
  * themselves.
  */
 public final class ViewModel {
@@ -55,7 +56,7 @@ public final class ViewModel {
             boolean mapWaveMissing = what.contains(ViewState.Aspect.MAP_WAVE)
                     && averages.wave(s.mapWave()) == null;
             if (what.contains(ViewState.Aspect.WAVES) || what.contains(ViewState.Aspect.PARTICIPANTS)
-                    || mapWaveMissing) {
+                    || what.contains(ViewState.Aspect.PROCESSING) || mapWaveMissing) {
                 recompute();
             }
         });
@@ -197,13 +198,26 @@ public final class ViewModel {
         return out;
     }
 
+    /**
+     * The study every panel computes from: the opened one with the processing of the current
+     * averages applied (the opened study itself when there is none), or null before any.
+     */
+    public org.meridian.core.Study study() {
+        if (session == null) {
+            return null;
+        }
+        return averages.study() != null ? averages.study() : session.study();
+    }
+
     private void recompute() {
         StudySession s = session;
         List<WaveEntry> shown = shownEntries();
         Set<String> excluded = state.excludedParticipants();
         IntervalKind kind = intervals;
-        tasks.submit("averages", "Grand averages",
-                p -> Averages.compute(s, shown, excluded, kind, p),
+        org.meridian.signal.Processing processing = state.processing();
+        Averages previous = averages;
+        tasks.submit("averages", processing.isNone() ? "Grand averages" : "Processing and grand averages",
+                p -> Averages.compute(s, processing, previous, shown, excluded, kind, p),
                 result -> {
                     if (s == session) {
                         averages = result;

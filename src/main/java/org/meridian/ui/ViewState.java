@@ -11,6 +11,7 @@ import javax.swing.SwingUtilities;
 import org.meridian.core.TimeAxis;
 import org.meridian.maps.ColourScale;
 import org.meridian.maps.ColourScales;
+import org.meridian.signal.Processing;
 
 /**
  * The one model of the window's state (DESIGN §10): what the researcher looks at, not what is
@@ -25,7 +26,9 @@ import org.meridian.maps.ColourScales;
  * <li>the participants left out of every grand average;
  * <li>potential or CSD for maps and the span view; the map moment (cursor or window mean);
  * <li>the colour range (automatic, symmetric about zero over the whole study, or locked), the
- *     colour scale, and the polarity convention of every waveform plot.
+ *     colour scale, and the polarity convention of every waveform plot;
+ * <li>the processing of every participant's averages before anything is computed from them
+ *     (restored reference, re-reference, filter, baseline: {@link Processing}).
  * </ul>
  *
  * Changes happen on the event thread only; listeners learn which {@link Aspect}s changed. A
@@ -34,7 +37,8 @@ import org.meridian.maps.ColourScales;
 public final class ViewState {
     /** What part of the state changed. */
     public enum Aspect {
-        CURSOR, WINDOW, CHANNELS, WAVES, MAP_WAVE, PARTICIPANTS, QUANTITY, MOMENT, COLOUR_RANGE, POLARITY
+        CURSOR, WINDOW, CHANNELS, WAVES, MAP_WAVE, PARTICIPANTS, QUANTITY, MOMENT, COLOUR_RANGE, POLARITY,
+        PROCESSING
     }
 
     /** Listens to the state. */
@@ -57,6 +61,7 @@ public final class ViewState {
     private ColourRange colourRange = ColourRange.automatic();
     private PolarityConvention polarity = PolarityConvention.POSITIVE_UP;
     private ColourScale colourScale = ColourScales.DIVERGING;
+    private Processing processing = Processing.none();
 
     /** Starts with a one-sample axis; {@link #reset} puts a study's axis in place. */
     public ViewState() {
@@ -73,7 +78,8 @@ public final class ViewState {
 
     /**
      * Puts a newly opened study's axis and defaults in place: cursor and window as given (snapped),
-     * channels, waves and participants as given. Fires every aspect.
+     * channels, waves and participants as given, no processing (its channels may not exist in the
+     * new study). Fires every aspect.
      */
     public void reset(TimeAxis newAxis, double cursor, double start, double end, List<String> channels,
             List<String> waves, String newMapWave) {
@@ -86,6 +92,7 @@ public final class ViewState {
         this.shownWaves = List.copyOf(waves);
         this.mapWave = newMapWave;
         this.excluded = Set.of();
+        this.processing = Processing.none();
         fire(EnumSet.allOf(Aspect.class));
     }
 
@@ -278,6 +285,19 @@ public final class ViewState {
         if (p != polarity) {
             polarity = p;
             fire(EnumSet.of(Aspect.POLARITY));
+        }
+    }
+
+    /** What is done to every participant's averages first ({@link Processing#none()}: nothing). */
+    public Processing processing() {
+        return processing;
+    }
+
+    public void setProcessing(Processing p) {
+        requireEventThread();
+        if (!p.equals(processing)) {
+            processing = p;
+            fire(EnumSet.of(Aspect.PROCESSING));
         }
     }
 

@@ -18,8 +18,9 @@ import org.jfree.chart.plot.XYPlot;
  * The waveform view: one channel with its interval bands, the selected channels overlaid, every
  * channel at its place on the scalp, or every channel over each other with the GFP beneath. A row
  * of buttons above switches between them; the interval choice applies to the one-channel plot.
- * Charts are rebuilt from the model's averages when waves, channels, participants, polarity or
- * theme change; the cursor and the window band are an overlay and cost no rebuild.
+ * Charts are rebuilt from the model's averages when waves, channels, participants, polarity,
+ * processing or theme change; the cursor and the window band are an overlay and cost no rebuild.
+ * When the averages were processed (reference, filter, baseline), the header says how.
  */
 final class WaveformPanel extends JPanel {
     private final Workbench bench;
@@ -29,6 +30,7 @@ final class WaveformPanel extends JPanel {
     private final ScalpLayoutView layoutView;
     private final Map<WaveformMode, JToggleButton> modeButtons = new EnumMap<>(WaveformMode.class);
     private final JComboBox<IntervalKind> intervals = new JComboBox<>(IntervalKind.values());
+    private final JLabel processing = new JLabel();
     private WaveformMode mode = WaveformMode.ONE_CHANNEL;
 
     WaveformPanel(Workbench bench) {
@@ -53,7 +55,10 @@ final class WaveformPanel extends JPanel {
                 layoutView.repaint();
             }
         });
-        bench.model().addListener((m, what) -> rebuild());
+        bench.model().addListener((m, what) -> {
+            showProcessing();
+            rebuild();
+        });
         bench.addThemeListener(t -> rebuild());
     }
 
@@ -82,7 +87,26 @@ final class WaveformPanel extends JPanel {
         intervals.addActionListener(e -> bench.model().setIntervals((IntervalKind) intervals.getSelectedItem()));
         row.add(new JLabel("  Band:"));
         row.add(intervals);
+        processing.setName("waveforms.processing");
+        processing.putClientProperty("FlatLaf.styleClass", "small");
+        processing.setVisible(false);
+        row.add(processing);
         return row;
+    }
+
+    /** States the processing of the averages on screen; hidden when there is none. */
+    private void showProcessing() {
+        org.meridian.signal.Processing p = bench.model().averages().processing();
+        processing.setVisible(!p.isNone());
+        processing.setText(p.isNone() ? "" : "  Processed: " + p.describe());
+        processing.setToolTipText(p.isNone() ? null
+                : "Every participant's averages were processed so before any grand average: " + p.describe()
+                + " (View → Processing… to change)");
+    }
+
+    /** The processing caption as shown ("" when hidden). */
+    String processingText() {
+        return processing.isVisible() ? processing.getText().trim() : "";
     }
 
     WaveformMode mode() {

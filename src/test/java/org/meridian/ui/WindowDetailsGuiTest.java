@@ -17,6 +17,8 @@ import org.assertj.swing.core.MouseButton;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
+import org.assertj.swing.finder.WindowFinder;
+import org.assertj.swing.fixture.DialogFixture;
 import org.assertj.swing.fixture.FrameFixture;
 import org.assertj.swing.timing.Condition;
 import org.assertj.swing.timing.Pause;
@@ -31,8 +33,8 @@ import org.meridian.maps.ColourLimits;
 
 /**
  * Details of the window on the demo study: what a cursor step repaints, the locked colour limit,
- * the status bar's readout, the measures table's polarity, emptiness and sort order, and the
- * window band in the scalp layout. Runs with AssertJ Swing's event-thread check; needs a display.
+ * the status bar's readout, the measures table's polarity, emptiness and sort order, the window
+ * band in the scalp layout, and the processing of the averages. Runs with AssertJ Swing's event-thread check; needs a display.
  */
 class WindowDetailsGuiTest {
     private static final Timeout WAIT = Timeout.timeout(30_000);
@@ -173,6 +175,58 @@ class WindowDetailsGuiTest {
         waitFor("the window's end to follow the drag", () -> Math.abs(state().windowEndMs() - 540) <= 2 * msPerPixel + 4);
         assertThat(read(() -> state().windowStartMs())).isEqualTo(260);
         assertThat(read(() -> state().currentChannel())).isEqualTo("Pz");
+    }
+
+    @Test
+    void aLowPassFilterSmoothsThePlottedWaveAndIsStatedAboveIt() {
+        double roughBefore = read(() -> roughness(plotted()));
+        double[] before = read(WindowDetailsGuiTest::plotted);
+        window.button("toolbar.processing").click();
+        DialogFixture dialog = WindowFinder.findDialog("processing").using(robot);
+        dialog.textBox("processing.lowPass").enterText("500");
+        // the demo is sampled at 250 Hz (4 ms steps), so 500 Hz lies above Nyquist, 125 Hz (Nyquist-Shannon)
+        dialog.label("processing.error").requireText(java.util.regex.Pattern.compile(".*125.*"));
+        dialog.button("processing.apply").requireDisabled();
+        dialog.textBox("processing.lowPass").deleteText().enterText("8");
+        dialog.label("processing.error").requireText(" ");
+        dialog.button("processing.apply").requireEnabled().click();
+        waitFor("the averages to be low-passed", () -> !frame.workbench().model().averages().processing().isNone());
+        settle();
+        assertThat(read(() -> frame.waveformPanel().processingText()))
+                .isEqualTo("Processed: low-pass 8 Hz, Butterworth order 4, zero-phase");
+        double[] after = read(WindowDetailsGuiTest::plotted);
+        assertThat(after).hasSameSizeAs(before).isNotEqualTo(before);
+        // common practice: a low-pass removes most of a wave's sample-to-sample curvature
+        assertThat(read(() -> roughness(plotted()))).isLessThan(roughBefore / 4);
+
+        dialog.button("processing.none").click();
+        dialog.button("processing.apply").click();
+        waitFor("the raw averages back", () -> frame.workbench().model().averages().processing().isNone());
+        settle();
+        assertThat(read(() -> frame.waveformPanel().processingText())).isEmpty();
+        assertThat(read(WindowDetailsGuiTest::plotted)).containsExactly(before);
+        dialog.button("processing.close").click();
+    }
+
+    /** The first wave of the one-channel chart (the grand average of "rare" at Pz), as plotted. */
+    private static double[] plotted() {
+        XYPlot plot = (XYPlot) frame.waveformPanel().chartPanel().getChart().getPlot();
+        org.jfree.data.xy.XYDataset d = plot.getDataset(0);
+        double[] out = new double[d.getItemCount(0)];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = d.getYValue(0, i);
+        }
+        return out;
+    }
+
+    /** The sum of squared second differences: large for a wave with fast wiggles. */
+    private static double roughness(double[] v) {
+        double sum = 0;
+        for (int i = 1; i + 1 < v.length; i++) {
+            double d = v[i + 1] - 2 * v[i] + v[i - 1];
+            sum += d * d;
+        }
+        return sum;
     }
 
     private static List<Double> peakValues(JTable table, int column) {
