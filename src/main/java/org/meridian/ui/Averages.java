@@ -87,12 +87,15 @@ public final class Averages {
         Study study = previous != null && previous.session == session && previous.processing.equals(processing)
                 ? previous.study : processing.apply(session.study());
         progress.checkCancelled();
-        Map<String, ConfidenceBand> bands = bands(study, shown, excluded, intervals);
+        Set<String> within = new java.util.HashSet<>();
+        Map<String, ConfidenceBand> bands = bands(study, shown, excluded, intervals, within);
         Map<String, WaveAverage> out = new LinkedHashMap<>();
         int done = 0;
         for (WaveEntry e : shown) {
             progress.checkCancelled();
-            Waveforms grand = GrandAverage.of(study, e.wave(),
+            // a within-participant band carries the very grand average (GrandAverage, unweighted)
+            ConfidenceBand band = bands.get(e.name());
+            Waveforms grand = band != null && within.contains(e.name()) ? band.mean() : GrandAverage.of(study, e.wave(),
                     GrandAverage.Weighting.UNWEIGHTED, excluded);
             Waveforms field = grand.select(session.fieldChannels());
             Waveforms csd = session.hasCsd() ? session.csdOf(grand) : null;
@@ -137,8 +140,9 @@ public final class Averages {
         return waves.isEmpty();
     }
 
+    /** The bands of the shown waves; the names of those formed within participants go to {@code withinNames}. */
     private static Map<String, ConfidenceBand> bands(Study study, List<WaveEntry> shown,
-            Set<String> excluded, IntervalKind intervals) {
+            Set<String> excluded, IntervalKind intervals, Set<String> withinNames) {
         Map<String, ConfidenceBand> out = new LinkedHashMap<>();
         int included = study.participants().size() - excluded.size();
         if (intervals == IntervalKind.NONE || included < 2) {
@@ -154,6 +158,7 @@ public final class Averages {
             for (ConfidenceBand b : ConfidenceBand.withinParticipants(study, within,
                     ConfidenceBand.DEFAULT_LEVEL, excluded)) {
                 out.put(b.name(), b);
+                withinNames.add(b.name());
             }
         }
         for (WaveEntry e : shown) {

@@ -52,8 +52,8 @@ final class StudyOpener {
     static Opened prepare(StudySession session, ViewOptions options, IntervalKind intervals,
             Tasks.TaskProgress progress) {
         progress.checkCancelled();
-        session.warmUp();
-        progress.checkCancelled();
+        // the map weights are built on other threads while this one works out the averages
+        java.util.concurrent.CompletableFuture<Void> maps = session.warmUpAsync();
         Study study = session.study();
         List<ConditionExpression> contrasts = new ArrayList<>();
         List<String> shown = new ArrayList<>();
@@ -85,6 +85,12 @@ final class StudyOpener {
             }
         }
         Averages averages = Averages.compute(session, computed, java.util.Set.of(), intervals, progress);
+        try {
+            maps.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+        progress.checkCancelled();
         return new Opened(session, entries, averages, defaults);
     }
 

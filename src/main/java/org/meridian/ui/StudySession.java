@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
@@ -166,13 +167,22 @@ public final class StudySession {
 
     /** Builds the map weights the window needs at once; call off the event thread. */
     public void warmUp() {
+        warmUpAsync().join();
+    }
+
+    /**
+     * Starts building the map weights the window needs (potential and CSD) on the common pool and
+     * returns at once, so that the caller can compute averages meanwhile; join the result.
+     */
+    public CompletableFuture<Void> warmUpAsync() {
         if (layout == null) {
-            return;
+            return CompletableFuture.completedFuture(null);
         }
-        maker(Quantity.POTENTIAL, LIVE_RESOLUTION);
-        if (hasCsd()) {
-            maker(Quantity.CSD, LIVE_RESOLUTION);
-        }
+        CompletableFuture<?> potential = CompletableFuture.runAsync(() -> maker(Quantity.POTENTIAL, LIVE_RESOLUTION));
+        CompletableFuture<?> csdWeights = hasCsd()
+                ? CompletableFuture.runAsync(() -> maker(Quantity.CSD, LIVE_RESOLUTION))
+                : CompletableFuture.completedFuture(null);
+        return CompletableFuture.allOf(potential, csdWeights);
     }
 
     /**
