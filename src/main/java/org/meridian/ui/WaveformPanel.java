@@ -85,8 +85,12 @@ final class WaveformPanel extends JPanel {
                 + "<br>or the within-participant interval of Cousineau (2005) with Morey's (2008) correction"
                 + "<br>for the shown conditions together (a contrast keeps the t-interval of its own differences)</html>");
         intervals.addActionListener(e -> bench.model().setIntervals((IntervalKind) intervals.getSelectedItem()));
-        row.add(new JLabel("  Band:"));
-        row.add(intervals);
+        // the label and its box wrap together
+        JPanel band = new JPanel(new java.awt.FlowLayout(java.awt.FlowLayout.LEFT, 4, 0));
+        band.setOpaque(false);
+        band.add(new JLabel("Band:"));
+        band.add(intervals);
+        row.add(band);
         processing.setName("waveforms.processing");
         processing.putClientProperty("FlatLaf.styleClass", "small");
         processing.setVisible(false);
