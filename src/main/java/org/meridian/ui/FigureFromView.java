@@ -87,7 +87,8 @@ final class FigureFromView {
                 null, null, null);
         return new FigureSpec(null, studyReference, new FigureSize(choices.width(), null), null, null,
                 state.polarity() == PolarityConvention.NEGATIVE_UP ? Polarity.NEGATIVE_UP : Polarity.POSITIVE_UP,
-                choices.letters(), conditions, List.copyOf(state.excludedParticipants()), null,
+                choices.letters(), conditions, List.copyOf(state.excludedParticipants()),
+                org.meridian.figure.spec.ProcessingSpec.of(state.processing()),
                 new IntervalSpec(intervals(model.intervals()), null, null), null, maps, rows);
     }
 
