@@ -28,7 +28,6 @@ import org.meridian.figure.FigureDrawing;
 import org.meridian.figure.Figures;
 import org.meridian.figure.spec.FigureSpec;
 import org.meridian.figure.spec.FigureWidth;
-import org.meridian.figure.spec.SpecFiles;
 import org.meridian.signal.TimeWindow;
 
 /**
@@ -111,7 +110,7 @@ final class FigureComposerDialog extends JDialog {
         times.addActionListener(e -> refresh());
         gfp.addActionListener(e -> refresh());
         letters.addActionListener(e -> refresh());
-        zoom.addActionListener(e -> preview.setZoom(ZOOM_FACTORS[zoom.getSelectedIndex()]));
+        zoom.addActionListener(e -> rezoom());
         fromView.addActionListener(e -> fromView());
         return row;
     }
@@ -197,13 +196,28 @@ final class FigureComposerDialog extends JDialog {
         }
         Study study = model.session().study();
         FigureSpec wanted = spec;
+        double pixels = preview.devicePixelsPerPoint();
         say("Drawing…", false);
-        model.tasks().submit("figure.preview", "Figure preview", p -> Figures.draw(wanted, study),
-                drawing -> {
-                    preview.show(drawing);
+        model.tasks().submit("figure.preview", "Figure preview",
+                p -> FigurePreview.render(Figures.draw(wanted, study), pixels),
+                rendered -> {
+                    preview.show(rendered);
+                    FigureDrawing drawing = rendered.figure();
                     say(String.format(Locale.ROOT, "%.0f × %.1f mm", drawing.widthMm(), drawing.heightMm()), false);
                 },
                 this::failed);
+    }
+
+    /** Shows the preview at the chosen zoom: the image is drawn again for it in the background. */
+    private void rezoom() {
+        preview.setZoom(ZOOM_FACTORS[zoom.getSelectedIndex()]);
+        FigureDrawing shown = preview.figure();
+        if (shown == null) {
+            return;
+        }
+        double pixels = preview.devicePixelsPerPoint();
+        model.tasks().submit("figure.preview", "Figure preview", p -> FigurePreview.render(shown, pixels),
+                preview::show, this::failed);
     }
 
     /** Makes the spec from the choices as they stand (typed text counts even before Enter). */
@@ -235,14 +249,13 @@ final class FigureComposerDialog extends JDialog {
         }
     }
 
-    /** Exports the figure and its spec beside it, in the background. */
+    /**
+     * Exports the figure and its spec beside it, in the background; a study with no file or
+     * folder (the simulated demo) is first written beside the figure ({@link FigureComposerExport}).
+     */
     void export() {
         Path study = studyPath();
         if (!rebuildSpec()) {
-            return;
-        }
-        if (study == null) {
-            say("This study has no file or folder to refer to; open it from disk to export a figure", true);
             return;
         }
         if (file.getText().isBlank()) {
@@ -257,40 +270,25 @@ final class FigureComposerDialog extends JDialog {
             say(e.getMessage(), true);
             return;
         }
-        Path specFile = besideAsJson(target);
-        FigureSpec saved = spec.withStudy(Figures.studyReference(study, specFile));
+        FigureSpec wanted = spec;
         Study data = model.session().study();
         int resolution = (Integer) dpi.getSelectedItem();
         export.setEnabled(false);
-        say("Exporting…", false);
-        model.tasks().submit("figure.export", "Figure export", p -> {
-            p.update(0, 3);
-            FigureDrawing drawing = Figures.draw(saved, data);
-            p.checkCancelled();
-            p.update(1, 3);
-            Figures.export(drawing, target, resolution);
-            p.update(2, 3);
-            SpecFiles.write(saved, specFile);
-            p.update(3, 3);
-            return target;
-        }, done -> {
-            export.setEnabled(true);
-            say("Saved " + done.getFileName() + " (" + format.extension().toUpperCase(Locale.ROOT) + ") and "
-                    + specFile.getFileName(), false);
-        }, e -> {
-            export.setEnabled(true);
-            failed(e);
-        }, () -> {
-            export.setEnabled(true);
-            say("Export cancelled", false);
-        });
-    }
-
-    /** The spec's file beside a figure: the same name with {@code .json}. */
-    static Path besideAsJson(Path figure) {
-        String name = figure.getFileName().toString();
-        int dot = name.lastIndexOf('.');
-        return figure.resolveSibling((dot > 0 ? name.substring(0, dot) : name) + ".json");
+        say(study == null ? "Saving the study beside the figure, then exporting…" : "Exporting…", false);
+        model.tasks().submit("figure.export", "Figure export",
+                p -> FigureComposerExport.run(wanted, data, study, target, resolution, p), done -> {
+                    export.setEnabled(true);
+                    String saved = "Saved " + done.figure().getFileName() + " ("
+                            + format.extension().toUpperCase(Locale.ROOT) + ") and " + done.spec().getFileName();
+                    say(done.writtenStudy() == null ? saved : saved + "; the study had no folder, so it was saved as "
+                            + done.writtenStudy().getFileName() + " beside them", false);
+                }, e -> {
+                    export.setEnabled(true);
+                    failed(e);
+                }, () -> {
+                    export.setEnabled(true);
+                    say("Export cancelled", false);
+                });
     }
 
     private void failed(Throwable t) {
