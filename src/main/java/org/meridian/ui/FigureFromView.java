@@ -66,7 +66,7 @@ final class FigureFromView {
             rows.add(new PanelRow(null, waves));
         }
         if (choices.spanTrace() && !conditions.isEmpty()) {
-            rows.add(PanelRow.of(new SpanTracePanel(null, null, rows.isEmpty(), null)));
+            rows.add(PanelRow.of(SpanTracePanel.gfp(rows.isEmpty())));
         }
         WaveEntry mapWave = model.entry(state.mapWave());
         boolean mappable = model.session() != null && model.session().hasMaps();
