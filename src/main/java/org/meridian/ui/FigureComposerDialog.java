@@ -86,7 +86,7 @@ final class FigureComposerDialog extends JDialog {
         channels.setName("figure.channels");
         channels.setToolTipText("Channels, each a waveform panel; join channels with + for a region (P3+Pz+P4)");
         times.setName("figure.times");
-        times.setToolTipText("Times of the maps in ms, separated by commas");
+        times.setToolTipText("The maps: times in ms (280, 310) or windows (280:310, 310:340), separated by commas");
         gfp.setName("figure.gfp");
         letters.setName("figure.letters");
         zoom.setName("figure.zoom");
@@ -98,7 +98,7 @@ final class FigureComposerDialog extends JDialog {
         row.add(width);
         row.add(new JLabel("Channels"));
         row.add(channels);
-        row.add(new JLabel("Map times (ms)"));
+        row.add(new JLabel("Maps (ms)"));
         row.add(times);
         row.add(gfp);
         row.add(letters);
@@ -139,12 +139,14 @@ final class FigureComposerDialog extends JDialog {
 
     /** Fills the choices from the window's view and previews. */
     void fromView() {
-        FigureFromView.Choices c = FigureFromView.suggested(state, mapCount(owner));
+        FigureFromView.Choices c = FigureFromView.suggested(state, mapCount(owner), waveformMode(owner));
         width.setSelectedIndex(c.width().mm() > FigureWidth.ONE_COLUMN.mm() ? 1 : 0);
         channels.setText(String.join(", ", c.channels()));
         List<String> t = new ArrayList<>();
         c.mapTimesMs().forEach(v -> t.add(TimeWindow.format(v)));
+        c.mapWindowsMs().forEach(w -> t.add(TimeWindow.format(w.get(0)) + ":" + TimeWindow.format(w.get(1))));
         times.setText(String.join(", ", t));
+        gfp.setSelected(c.spanTrace());
         refresh();
     }
 
@@ -164,6 +166,22 @@ final class FigureComposerDialog extends JDialog {
         return root == null || root instanceof Window ? SpanPanel.DEFAULT_MAPS : -1;
     }
 
+    /** The mode of the window's waveform view, or null when there is none. */
+    private static WaveformMode waveformMode(Component root) {
+        if (root instanceof WaveformPanel w) {
+            return w.mode();
+        }
+        if (root instanceof Container c) {
+            for (Component child : c.getComponents()) {
+                WaveformMode m = waveformMode(child);
+                if (m != null) {
+                    return m;
+                }
+            }
+        }
+        return null;
+    }
+
     private FigureFromView.Choices readChoices() {
         List<String> picked = new ArrayList<>();
         for (String part : channels.getText().split(",")) {
@@ -172,17 +190,27 @@ final class FigureComposerDialog extends JDialog {
             }
         }
         List<Double> ms = new ArrayList<>();
+        List<List<Double>> windows = new ArrayList<>();
         for (String part : times.getText().split(",")) {
-            if (!part.isBlank()) {
+            if (part.isBlank()) {
+                continue;
+            }
+            if (part.indexOf(':', 1) > 0) {
+                TimeWindow w = TimeWindow.parse(part);
+                windows.add(List.of(w.startMs(), w.endMs()));
+            } else {
                 try {
                     ms.add(Double.parseDouble(part.trim()));
                 } catch (NumberFormatException e) {
-                    throw new BadInputException("map times: \"" + part.trim() + "\" is not a number of ms");
+                    throw new BadInputException("maps: \"" + part.trim() + "\" is not a time in ms (300) or a window (300:350)");
                 }
             }
         }
+        if (!ms.isEmpty() && !windows.isEmpty()) {
+            throw new BadInputException("maps: give times (300, 350) or windows (300:350, 350:400), not both");
+        }
         FigureWidth w = width.getSelectedIndex() == 1 ? FigureWidth.TWO_COLUMN : FigureWidth.ONE_COLUMN;
-        return new FigureFromView.Choices(w, picked, ms, gfp.isSelected(), letters.isSelected());
+        return new FigureFromView.Choices(w, picked, ms, windows, gfp.isSelected(), letters.isSelected());
     }
 
     private Path studyPath() {
