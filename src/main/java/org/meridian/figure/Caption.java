@@ -20,7 +20,9 @@ final class Caption {
     /** The caption's text, or null when the figure shows the data as loaded. */
     static String text(FigureSpec spec) {
         Processing p = spec.processingValue();
-        return p.isNone() ? null : "Processing: " + p.describe() + ".";
+        // a number stays on the line of its unit
+        return p.isNone() ? null : ("Processing: " + p.describe() + ".").replace(" Hz", "\u00A0Hz")
+                .replace(" ms", "\u00A0ms");
     }
 
     /** The text broken at spaces into lines no wider than {@code widthPt} (a longer word stands alone). */

@@ -29,6 +29,7 @@ import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.ConditionWave;
 import org.meridian.signal.ConfidenceBand;
 import org.meridian.signal.GrandAverage;
+import org.meridian.signal.TimeWindow;
 import org.meridian.span.FieldStatistics;
 import org.meridian.span.SpanAnalysis;
 import org.meridian.spline.SplineParameters;
@@ -47,14 +48,16 @@ public final class FigureContent {
     private final List<PanelContent> panels;
     private final WaveScales waveScales;
     private final WaveScales gfpScales;
+    private final WaveScales dissScales;
     private final MapScales mapScales;
 
     private FigureContent(FigureSpec spec, List<PanelContent> panels, WaveScales waveScales, WaveScales gfpScales,
-            MapScales mapScales) {
+            WaveScales dissScales, MapScales mapScales) {
         this.spec = spec;
         this.panels = List.copyOf(panels);
         this.waveScales = waveScales;
         this.gfpScales = gfpScales;
+        this.dissScales = dissScales;
         this.mapScales = mapScales;
     }
 
@@ -75,6 +78,11 @@ public final class FigureContent {
     /** The axes of the span-trace panels (GFP from 0), or null when there is none. */
     public WaveScales gfpScales() {
         return gfpScales;
+    }
+
+    /** The axes of the DISS traces (0 to 2), or null when there is none. */
+    public WaveScales dissScales() {
+        return dissScales;
     }
 
     /** The map scales, or null when the figure has no map strip. */
@@ -129,7 +137,7 @@ public final class FigureContent {
                 marks.addAll(marks(m));
                 out.add(strip);
             } else if (p instanceof SpanTracePanel t) {
-                out.add(spanTrace(spec, study, t, waves, t0, t1));
+                out.add(spanTrace(spec, study, t, waves, t0, t1, where));
             } else if (p instanceof ColourBarPanel) {
                 if (!anyStrip) {
                     throw new BadInputException(where + ": a colour bar needs a map strip in the figure");
@@ -139,10 +147,13 @@ public final class FigureContent {
         }
         WaveScales waveScales = out.stream().anyMatch(c -> c instanceof PanelContent.Waveforms)
                 ? FigureScales.waves(spec, study, out, t0, t1, axes.markMaps() ? marks : List.of()) : null;
-        WaveScales gfpScales = out.stream().anyMatch(c -> c instanceof PanelContent.SpanTrace)
-                ? FigureScales.gfp(spec, study, out, t0, t1, axes.markMaps() ? marks : List.of()) : null;
+        List<double[]> marked = axes.markMaps() ? marks : List.of();
+        WaveScales gfpScales = out.stream().anyMatch(c -> c instanceof PanelContent.SpanTrace t && !t.diss())
+                ? FigureScales.gfp(spec, study, out, t0, t1, marked) : null;
+        WaveScales dissScales = out.stream().anyMatch(c -> c instanceof PanelContent.SpanTrace t && t.diss())
+                ? FigureScales.diss(spec, study, t0, t1, marked) : null;
         MapScales mapScales = allMaps.isEmpty() ? null : FigureScales.maps(spec.maps(), allMaps);
-        return new FigureContent(spec, out, waveScales, gfpScales, mapScales);
+        return new FigureContent(spec, out, waveScales, gfpScales, dissScales, mapScales);
     }
 
     private static Set<String> excluded(FigureSpec spec) {
@@ -233,10 +244,12 @@ public final class FigureContent {
 
     /**
      * GFP of each shown wave's grand average over the field channels (those with positions,
-     * as the span analysis uses): {@code span.FieldStatistics.gfp} sample by sample.
+     * as the span analysis uses): {@code span.FieldStatistics.gfp} sample by sample; or its DISS
+     * to the reference map ({@code span.FieldStatistics.diss}), the map at the panel's reference
+     * time or at the wave's GFP maximum inside the panel's window.
      */
     private static PanelContent.SpanTrace spanTrace(FigureSpec spec, Study study, SpanTracePanel panel,
-            Map<String, ConditionExpression> waves, double t0, double t1) {
+            Map<String, ConditionExpression> waves, double t0, double t1, String where) {
         TimeAxis axis = study.axis();
         int a = firstSample(axis, t0);
         int b = lastSample(axis, t1);
@@ -247,14 +260,55 @@ public final class FigureContent {
             Waveforms average = GrandAverage.of(study, waves.get(c.wave()), GrandAverage.Weighting.UNWEIGHTED, excluded(spec))
                     .select(field);
             double[] map = new double[average.channelCount()];
-            double[] gfp = new double[times.length];
+            double[] values = new double[times.length];
+            double[] reference = panel.isDiss() ? referenceMap(average, panel, where) : null;
             for (int s = a; s <= b; s++) {
                 average.sampleInto(s, map);
-                gfp[s - a] = FieldStatistics.gfp(map);
+                values[s - a] = reference == null ? FieldStatistics.gfp(map) : FieldStatistics.diss(map, reference);
             }
-            traces.add(new WaveTrace(c.label(), Color.decode(c.colour()), c.dashed(), times, gfp, null, null));
+            traces.add(new WaveTrace(c.label(), Color.decode(c.colour()), c.dashed(), times, values, null, null));
         }
-        return new PanelContent.SpanTrace(panel.title(), traces, panel.legend());
+        return new PanelContent.SpanTrace(panel.title(), traces, panel.legend(), panel.isDiss());
+    }
+
+    /** A DISS trace's reference: the map at reference_ms, or at the GFP maximum inside window_ms. */
+    private static double[] referenceMap(Waveforms average, SpanTracePanel panel, String where) {
+        TimeAxis axis = average.axis();
+        int at;
+        if (panel.referenceMs() != null) {
+            double t = panel.referenceMs();
+            if (t < axis.firstMs() - axis.stepMs() / 2 || t > axis.lastMs() + axis.stepMs() / 2) {
+                throw new BadInputException(where + ".reference_ms: " + TimeWindow.format(t) + " ms lies outside the data ("
+                        + TimeWindow.format(axis.firstMs()) + ".." + TimeWindow.format(axis.lastMs()) + " ms)");
+            }
+            at = axis.nearestIndex(t);
+        } else {
+            int from = 0;
+            int to = axis.samples() - 1;
+            if (panel.windowMs() != null) {
+                try {
+                    TimeWindow.SampleRange r = new TimeWindow(panel.windowMs().get(0), panel.windowMs().get(1)).resolve(axis);
+                    from = r.from();
+                    to = r.to();
+                } catch (BadInputException e) {
+                    throw new BadInputException(where + ".window_ms: " + e.getMessage(), e);
+                }
+            }
+            double[] map = new double[average.channelCount()];
+            at = from;
+            double best = -1;
+            for (int s = from; s <= to; s++) {
+                average.sampleInto(s, map);
+                double g = FieldStatistics.gfp(map);
+                if (g > best) {
+                    best = g;
+                    at = s;
+                }
+            }
+        }
+        double[] reference = new double[average.channelCount()];
+        average.sampleInto(at, reference);
+        return reference;
     }
 
     /**

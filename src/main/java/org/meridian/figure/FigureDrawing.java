@@ -26,6 +26,7 @@ public final class FigureDrawing implements Drawing {
     private final Map<Integer, Integer> bandLines = new HashMap<>();
     private final WaveScales waveScales;
     private final WaveScales gfpScales;
+    private final WaveScales dissScales;
 
     public FigureDrawing(FigureContent content) {
         this.content = content;
@@ -41,6 +42,7 @@ public final class FigureDrawing implements Drawing {
         WaveScales[] fitted = fitAxes();
         this.waveScales = fitted[0];
         this.gfpScales = fitted[1];
+        this.dissScales = fitted[2];
     }
 
     /** Lays out every waveform and span-trace legend (they depend only on the panels' widths). */
@@ -63,9 +65,14 @@ public final class FigureDrawing implements Drawing {
         return waveScales;
     }
 
-    /** The span-trace axes as drawn, or null. */
+    /** The GFP axes as drawn, or null. */
     public WaveScales gfpScales() {
         return gfpScales;
+    }
+
+    /** The DISS axes as drawn, or null. */
+    public WaveScales dissScales() {
+        return dissScales;
     }
 
     public FigureLayout layout() {
@@ -130,7 +137,7 @@ public final class FigureDrawing implements Drawing {
                 SvgGroups.end(g);
             } else if (c instanceof PanelContent.SpanTrace t) {
                 SvgGroups.begin(g, id, "span-trace");
-                WaveformPainter.draw(g, b, t.asWaveforms(), gfpScales, style, p.letter(), true,
+                WaveformPainter.draw(g, b, t.asWaveforms(), t.diss() ? dissScales : gfpScales, style, p.letter(), true,
                         legends.get(p.index()), bandLines.get(p.row()), opacity);
                 SvgGroups.end(g);
             } else if (c instanceof PanelContent.MapStrip m) {
@@ -152,46 +159,49 @@ public final class FigureDrawing implements Drawing {
     }
 
     /**
-     * The waveform and span-trace axes with tick steps the panels have room for ({@link AxisFit}):
-     * amplitude steps from the shortest plot of each kind, one time step for both from the
+     * The waveform, GFP and DISS axes with tick steps the panels have room for ({@link AxisFit}):
+     * amplitude steps from the shortest plot of each kind, one time step for all from the
      * narrowest plot.
      */
     private WaveScales[] fitAxes() {
-        WaveScales waves = content.waveScales();
-        WaveScales gfp = content.gfpScales();
-        double wavesHeight = Double.POSITIVE_INFINITY;
-        double gfpHeight = Double.POSITIVE_INFINITY;
+        WaveScales[] scales = {content.waveScales(), content.gfpScales(), content.dissScales()};
+        double[] heights = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY};
         for (Placed p : layout.placed()) {
-            PanelContent c = content.panels().get(p.index());
-            Rectangle2D b = p.boundsPt();
-            double h = bandLines.containsKey(p.row())
-                    ? WaveformPainter.plotHeight(b, style, bandLines.get(p.row())) : Double.POSITIVE_INFINITY;
-            if (c instanceof PanelContent.Waveforms) {
-                wavesHeight = Math.min(wavesHeight, h);
-            } else if (c instanceof PanelContent.SpanTrace) {
-                gfpHeight = Math.min(gfpHeight, h);
+            int kind = kind(content.panels().get(p.index()));
+            if (kind >= 0) {
+                heights[kind] = Math.min(heights[kind], WaveformPainter.plotHeight(p.boundsPt(), style,
+                        bandLines.get(p.row())));
             }
         }
         var axes = content.spec().waveforms();
-        if (waves != null) {
-            waves = AxisFit.amplitude(waves, axes.amplitudeStep() != null, axes.amplitude() != null, false,
-                    wavesHeight, style);
-            waves = AxisFit.label(waves, wavesHeight + 4, style);
-        }
-        if (gfp != null) {
-            gfp = AxisFit.label(AxisFit.amplitude(gfp, false, false, true, gfpHeight, style), gfpHeight + 4, style);
+        for (int k = 0; k < 3; k++) {
+            if (scales[k] != null) {
+                boolean fixedStep = k == 0 && axes.amplitudeStep() != null;
+                boolean fixedRange = k == 0 ? axes.amplitude() != null : k == 2;
+                scales[k] = AxisFit.amplitude(scales[k], fixedStep, fixedRange, k == 1, heights[k], style);
+                scales[k] = AxisFit.label(scales[k], heights[k] + 4, style);
+            }
         }
         double step = 0;
         for (Placed p : layout.placed()) {
-            PanelContent c = content.panels().get(p.index());
-            WaveScales s = c instanceof PanelContent.Waveforms ? waves : c instanceof PanelContent.SpanTrace ? gfp : null;
-            if (s != null) {
-                double width = WaveformPainter.plotWidth(p.boundsPt(), s, style);
-                step = Math.max(step, AxisFit.timeStep(s, axes.timeStepMs() != null, width, style));
+            int kind = kind(content.panels().get(p.index()));
+            if (kind >= 0) {
+                double width = WaveformPainter.plotWidth(p.boundsPt(), scales[kind], style);
+                step = Math.max(step, AxisFit.timeStep(scales[kind], axes.timeStepMs() != null, width, style));
             }
         }
-        return new WaveScales[] {waves == null ? null : waves.withTimeStep(step),
-            gfp == null ? null : gfp.withTimeStep(step)};
+        for (int k = 0; k < 3; k++) {
+            scales[k] = scales[k] == null ? null : scales[k].withTimeStep(step);
+        }
+        return scales;
+    }
+
+    /** 0 for a waveform panel, 1 for a GFP trace, 2 for a DISS trace, -1 otherwise. */
+    private static int kind(PanelContent c) {
+        if (c instanceof PanelContent.Waveforms) {
+            return 0;
+        }
+        return c instanceof PanelContent.SpanTrace t ? (t.diss() ? 2 : 1) : -1;
     }
 
     /**

@@ -69,7 +69,7 @@ final class FigureScales {
             double t1, List<double[]> marks) {
         double max = 0;
         for (PanelContent c : panels) {
-            if (c instanceof PanelContent.SpanTrace t) {
+            if (c instanceof PanelContent.SpanTrace t && !t.diss()) {
                 for (WaveTrace w : t.traces()) {
                     for (double v : w.mean()) {
                         max = Math.max(max, v);
@@ -82,6 +82,13 @@ final class FigureScales {
         WaveScales waves = waves(spec, study, List.of(), t0, t1, marks);
         return new WaveScales(t0, t1, waves.timeStepMs(), 0, hi, step, waves.timeLabel(),
                 "GFP (" + study.unit().symbol() + ")", Polarity.POSITIVE_UP, marks, 0, max);
+    }
+
+    /** The DISS axis: 0 (same map shape) to 2 (inverted), in steps of 0.5. */
+    static WaveScales diss(FigureSpec spec, Study study, double t0, double t1, List<double[]> marks) {
+        WaveScales waves = waves(spec, study, List.of(), t0, t1, marks);
+        return new WaveScales(t0, t1, waves.timeStepMs(), 0, 2, 0.5, waves.timeLabel(), "DISS",
+                Polarity.POSITIVE_UP, marks, 0, 2);
     }
 
     /** [min, max] widened to whole steps (at least one step). */

@@ -22,8 +22,8 @@ public sealed interface PanelContent {
         }
     }
 
-    /** GFP traces of grand-average waves, drawn like waves on the GFP scale. */
-    record SpanTrace(String title, List<WaveTrace> traces, boolean legend) implements PanelContent {
+    /** GFP or DISS traces of grand-average waves, drawn like waves on the GFP or DISS scale. */
+    record SpanTrace(String title, List<WaveTrace> traces, boolean legend, boolean diss) implements PanelContent {
         public SpanTrace {
             traces = List.copyOf(traces);
         }

@@ -28,7 +28,6 @@ import org.meridian.figure.FigureDrawing;
 import org.meridian.figure.Figures;
 import org.meridian.figure.spec.FigureSpec;
 import org.meridian.figure.spec.FigureWidth;
-import org.meridian.figure.spec.SpecFiles;
 import org.meridian.signal.TimeWindow;
 
 /**
@@ -87,7 +86,7 @@ final class FigureComposerDialog extends JDialog {
         channels.setName("figure.channels");
         channels.setToolTipText("Channels, each a waveform panel; join channels with + for a region (P3+Pz+P4)");
         times.setName("figure.times");
-        times.setToolTipText("Times of the maps in ms, separated by commas");
+        times.setToolTipText("The maps: times in ms (280, 310) or windows (280:310, 310:340), separated by commas");
         gfp.setName("figure.gfp");
         letters.setName("figure.letters");
         zoom.setName("figure.zoom");
@@ -99,7 +98,7 @@ final class FigureComposerDialog extends JDialog {
         row.add(width);
         row.add(new JLabel("Channels"));
         row.add(channels);
-        row.add(new JLabel("Map times (ms)"));
+        row.add(new JLabel("Maps (ms)"));
         row.add(times);
         row.add(gfp);
         row.add(letters);
@@ -111,7 +110,7 @@ final class FigureComposerDialog extends JDialog {
         times.addActionListener(e -> refresh());
         gfp.addActionListener(e -> refresh());
         letters.addActionListener(e -> refresh());
-        zoom.addActionListener(e -> preview.setZoom(ZOOM_FACTORS[zoom.getSelectedIndex()]));
+        zoom.addActionListener(e -> rezoom());
         fromView.addActionListener(e -> fromView());
         return row;
     }
@@ -140,12 +139,14 @@ final class FigureComposerDialog extends JDialog {
 
     /** Fills the choices from the window's view and previews. */
     void fromView() {
-        FigureFromView.Choices c = FigureFromView.suggested(state, mapCount(owner));
+        FigureFromView.Choices c = FigureFromView.suggested(state, mapCount(owner), waveformMode(owner));
         width.setSelectedIndex(c.width().mm() > FigureWidth.ONE_COLUMN.mm() ? 1 : 0);
         channels.setText(String.join(", ", c.channels()));
         List<String> t = new ArrayList<>();
         c.mapTimesMs().forEach(v -> t.add(TimeWindow.format(v)));
+        c.mapWindowsMs().forEach(w -> t.add(TimeWindow.format(w.get(0)) + ":" + TimeWindow.format(w.get(1))));
         times.setText(String.join(", ", t));
+        gfp.setSelected(c.spanTrace());
         refresh();
     }
 
@@ -165,6 +166,22 @@ final class FigureComposerDialog extends JDialog {
         return root == null || root instanceof Window ? SpanPanel.DEFAULT_MAPS : -1;
     }
 
+    /** The mode of the window's waveform view, or null when there is none. */
+    private static WaveformMode waveformMode(Component root) {
+        if (root instanceof WaveformPanel w) {
+            return w.mode();
+        }
+        if (root instanceof Container c) {
+            for (Component child : c.getComponents()) {
+                WaveformMode m = waveformMode(child);
+                if (m != null) {
+                    return m;
+                }
+            }
+        }
+        return null;
+    }
+
     private FigureFromView.Choices readChoices() {
         List<String> picked = new ArrayList<>();
         for (String part : channels.getText().split(",")) {
@@ -173,17 +190,27 @@ final class FigureComposerDialog extends JDialog {
             }
         }
         List<Double> ms = new ArrayList<>();
+        List<List<Double>> windows = new ArrayList<>();
         for (String part : times.getText().split(",")) {
-            if (!part.isBlank()) {
+            if (part.isBlank()) {
+                continue;
+            }
+            if (part.indexOf(':', 1) > 0) {
+                TimeWindow w = TimeWindow.parse(part);
+                windows.add(List.of(w.startMs(), w.endMs()));
+            } else {
                 try {
                     ms.add(Double.parseDouble(part.trim()));
                 } catch (NumberFormatException e) {
-                    throw new BadInputException("map times: \"" + part.trim() + "\" is not a number of ms");
+                    throw new BadInputException("maps: \"" + part.trim() + "\" is not a time in ms (300) or a window (300:350)");
                 }
             }
         }
+        if (!ms.isEmpty() && !windows.isEmpty()) {
+            throw new BadInputException("maps: give times (300, 350) or windows (300:350, 350:400), not both");
+        }
         FigureWidth w = width.getSelectedIndex() == 1 ? FigureWidth.TWO_COLUMN : FigureWidth.ONE_COLUMN;
-        return new FigureFromView.Choices(w, picked, ms, gfp.isSelected(), letters.isSelected());
+        return new FigureFromView.Choices(w, picked, ms, windows, gfp.isSelected(), letters.isSelected());
     }
 
     private Path studyPath() {
@@ -197,13 +224,28 @@ final class FigureComposerDialog extends JDialog {
         }
         Study study = model.session().study();
         FigureSpec wanted = spec;
+        double pixels = preview.devicePixelsPerPoint();
         say("Drawing…", false);
-        model.tasks().submit("figure.preview", "Figure preview", p -> Figures.draw(wanted, study),
-                drawing -> {
-                    preview.show(drawing);
+        model.tasks().submit("figure.preview", "Figure preview",
+                p -> FigurePreview.render(Figures.draw(wanted, study), pixels),
+                rendered -> {
+                    preview.show(rendered);
+                    FigureDrawing drawing = rendered.figure();
                     say(String.format(Locale.ROOT, "%.0f × %.1f mm", drawing.widthMm(), drawing.heightMm()), false);
                 },
                 this::failed);
+    }
+
+    /** Shows the preview at the chosen zoom: the image is drawn again for it in the background. */
+    private void rezoom() {
+        preview.setZoom(ZOOM_FACTORS[zoom.getSelectedIndex()]);
+        FigureDrawing shown = preview.figure();
+        if (shown == null) {
+            return;
+        }
+        double pixels = preview.devicePixelsPerPoint();
+        model.tasks().submit("figure.preview", "Figure preview", p -> FigurePreview.render(shown, pixels),
+                preview::show, this::failed);
     }
 
     /** Makes the spec from the choices as they stand (typed text counts even before Enter). */
@@ -235,14 +277,13 @@ final class FigureComposerDialog extends JDialog {
         }
     }
 
-    /** Exports the figure and its spec beside it, in the background. */
+    /**
+     * Exports the figure and its spec beside it, in the background; a study with no file or
+     * folder (the simulated demo) is first written beside the figure ({@link FigureComposerExport}).
+     */
     void export() {
         Path study = studyPath();
         if (!rebuildSpec()) {
-            return;
-        }
-        if (study == null) {
-            say("This study has no file or folder to refer to; open it from disk to export a figure", true);
             return;
         }
         if (file.getText().isBlank()) {
@@ -257,40 +298,25 @@ final class FigureComposerDialog extends JDialog {
             say(e.getMessage(), true);
             return;
         }
-        Path specFile = besideAsJson(target);
-        FigureSpec saved = spec.withStudy(Figures.studyReference(study, specFile));
+        FigureSpec wanted = spec;
         Study data = model.session().study();
         int resolution = (Integer) dpi.getSelectedItem();
         export.setEnabled(false);
-        say("Exporting…", false);
-        model.tasks().submit("figure.export", "Figure export", p -> {
-            p.update(0, 3);
-            FigureDrawing drawing = Figures.draw(saved, data);
-            p.checkCancelled();
-            p.update(1, 3);
-            Figures.export(drawing, target, resolution);
-            p.update(2, 3);
-            SpecFiles.write(saved, specFile);
-            p.update(3, 3);
-            return target;
-        }, done -> {
-            export.setEnabled(true);
-            say("Saved " + done.getFileName() + " (" + format.extension().toUpperCase(Locale.ROOT) + ") and "
-                    + specFile.getFileName(), false);
-        }, e -> {
-            export.setEnabled(true);
-            failed(e);
-        }, () -> {
-            export.setEnabled(true);
-            say("Export cancelled", false);
-        });
-    }
-
-    /** The spec's file beside a figure: the same name with {@code .json}. */
-    static Path besideAsJson(Path figure) {
-        String name = figure.getFileName().toString();
-        int dot = name.lastIndexOf('.');
-        return figure.resolveSibling((dot > 0 ? name.substring(0, dot) : name) + ".json");
+        say(study == null ? "Saving the study beside the figure, then exporting…" : "Exporting…", false);
+        model.tasks().submit("figure.export", "Figure export",
+                p -> FigureComposerExport.run(wanted, data, study, target, resolution, p), done -> {
+                    export.setEnabled(true);
+                    String saved = "Saved " + done.figure().getFileName() + " ("
+                            + format.extension().toUpperCase(Locale.ROOT) + ") and " + done.spec().getFileName();
+                    say(done.writtenStudy() == null ? saved : saved + "; the study had no folder, so it was saved as "
+                            + done.writtenStudy().getFileName() + " beside them", false);
+                }, e -> {
+                    export.setEnabled(true);
+                    failed(e);
+                }, () -> {
+                    export.setEnabled(true);
+                    say("Export cancelled", false);
+                });
     }
 
     private void failed(Throwable t) {

@@ -33,21 +33,51 @@ final class FigureFromView {
     private FigureFromView() {
     }
 
-    /** What the composer lets the researcher change before export. */
-    record Choices(FigureWidth width, List<String> channels, List<Double> mapTimesMs, boolean spanTrace,
-            boolean letters) {
+    /**
+     * What the composer lets the researcher change before export. The maps are at times or over
+     * windows ({@code [from, to]} ms): one of the two lists is empty.
+     */
+    record Choices(FigureWidth width, List<String> channels, List<Double> mapTimesMs,
+            List<List<Double>> mapWindowsMs, boolean spanTrace, boolean letters) {
         Choices {
             channels = List.copyOf(channels);
             mapTimesMs = List.copyOf(mapTimesMs);
+            mapWindowsMs = List.copyOf(mapWindowsMs);
         }
     }
 
-    /** The choices the view suggests: its channels, its strip's times, two columns for wide figures. */
-    static Choices suggested(ViewState state, int mapCount) {
+    /**
+     * The choices the view suggests, following its modes: its channels (one panel each, also
+     * when they are overlaid — a spec's conditions own the colours, so channels get panels of
+     * their own); the span view's strip times, or, when the scalp map shows window means, as
+     * many equal windows across the view's window; a GFP trace when the waveforms show all
+     * channels with the GFP; two columns for wide figures.
+     *
+     * @param mode the waveform view's mode, or null when there is none
+     */
+    static Choices suggested(ViewState state, int mapCount, WaveformMode mode) {
         List<String> channels = state.selectedChannels().isEmpty() ? List.of() : state.selectedChannels();
-        List<Double> times = SpanData.stripTimes(state.axis(), state.windowStartMs(), state.windowEndMs(), mapCount);
-        FigureWidth width = channels.size() >= 2 || times.size() >= 4 ? FigureWidth.TWO_COLUMN : FigureWidth.ONE_COLUMN;
-        return new Choices(width, channels, times, false, true);
+        List<Double> times = List.of();
+        List<List<Double>> windows = List.of();
+        if (state.moment() == MapMomentMode.WINDOW_MEAN) {
+            windows = equalWindows(state.windowStartMs(), state.windowEndMs(), Math.max(1, mapCount));
+        } else {
+            times = SpanData.stripTimes(state.axis(), state.windowStartMs(), state.windowEndMs(), mapCount);
+        }
+        int maps = Math.max(times.size(), windows.size());
+        FigureWidth width = channels.size() >= 2 || maps >= 4 ? FigureWidth.TWO_COLUMN : FigureWidth.ONE_COLUMN;
+        return new Choices(width, channels, times, windows, mode == WaveformMode.BUTTERFLY, true);
+    }
+
+    /** [from, to] cut into n equal, touching windows, their edges rounded to 0.1 ms. */
+    static List<List<Double>> equalWindows(double from, double to, int n) {
+        List<List<Double>> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            double a = Math.round((from + (to - from) * i / n) * 10) / 10.0;
+            double b = Math.round((from + (to - from) * (i + 1) / n) * 10) / 10.0;
+            out.add(List.of(a, b));
+        }
+        return out;
     }
 
     static FigureSpec build(ViewState state, ViewModel model, Choices choices, String studyReference) {
@@ -66,17 +96,20 @@ final class FigureFromView {
             rows.add(new PanelRow(null, waves));
         }
         if (choices.spanTrace() && !conditions.isEmpty()) {
-            rows.add(PanelRow.of(new SpanTracePanel(null, null, rows.isEmpty(), null)));
+            rows.add(PanelRow.of(SpanTracePanel.gfp(rows.isEmpty())));
         }
         WaveEntry mapWave = model.entry(state.mapWave());
         boolean mappable = model.session() != null && model.session().hasMaps();
-        if (mappable && mapWave != null && !choices.mapTimesMs().isEmpty()) {
+        boolean anyMaps = !choices.mapTimesMs().isEmpty() || !choices.mapWindowsMs().isEmpty();
+        if (mappable && mapWave != null && anyMaps) {
             List<String> positioned = model.session().study().montage().labels();
             // ring the waveform channels that have a place on the head (regions and EOG channels have none)
             List<String> ringed = choices.channels().stream()
                     .filter(c -> positioned.stream().anyMatch(c::equalsIgnoreCase)).toList();
-            rows.add(PanelRow.of(MapStripPanel.atTimes(waveText(mapWave), choices.mapTimesMs())
-                    .withHighlight(ringed), ColourBarPanel.standard()));
+            MapStripPanel strip = choices.mapWindowsMs().isEmpty()
+                    ? MapStripPanel.atTimes(waveText(mapWave), choices.mapTimesMs())
+                    : new MapStripPanel(waveText(mapWave), null, choices.mapWindowsMs(), null, null, null);
+            rows.add(PanelRow.of(strip.withHighlight(ringed), ColourBarPanel.standard()));
         }
         // as the span view: CSD where the study allows it, else the potential
         boolean csd = state.quantity() == org.meridian.ui.MapQuantity.CSD && model.session() != null

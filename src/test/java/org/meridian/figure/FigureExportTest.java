@@ -98,12 +98,13 @@ class FigureExportTest {
                     .contains("rare - frequent").contains("(positive up)");
             // the amplitude label runs upwards: the stripper gives it a letter group a line
             assertThat(text.replaceAll("\\s", "")).contains("Amplitude(µV)");
-            // the map times sit under the maps: in the lower half of the page
+            // the map times sit under the maps: below the top of the map row
             PDFTextStripperByArea area = new PDFTextStripperByArea();
             float h = page.getMediaBox().getHeight();
             float w = page.getMediaBox().getWidth();
-            area.addRegion("lower", new java.awt.geom.Rectangle2D.Float(0, h / 2, w, h / 2));
-            area.addRegion("upper", new java.awt.geom.Rectangle2D.Float(0, 0, w, h / 2));
+            float strip = (float) figure.layout().placed().get(3).boundsPt().getY();
+            area.addRegion("lower", new java.awt.geom.Rectangle2D.Float(0, strip, w, h - strip));
+            area.addRegion("upper", new java.awt.geom.Rectangle2D.Float(0, 0, w, strip));
             area.extractRegions(page);
             assertThat(area.getTextForRegion("lower")).contains("340 ms").contains("µV");
             assertThat(area.getTextForRegion("upper")).contains("Time (ms)").doesNotContain("340 ms");

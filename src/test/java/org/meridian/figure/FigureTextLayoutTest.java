@@ -29,7 +29,7 @@ class FigureTextLayoutTest {
                 .replace("\"colour_scale\": \"diverging\"", "\"colour_scale\": \"diverging\", \"resolution\": 48");
     }
 
-    /** A harder figure: region panel with a long legend, span traces, a CSD strip, processing. */
+    /** A harder figure: region panel with a long legend, GFP and DISS traces, a CSD strip, processing. */
     private static String crowded(String width) {
         return """
                 {
@@ -42,7 +42,8 @@ class FigureTextLayoutTest {
                   "rows": [
                     {"panels": [
                       {"type": "waveforms", "channels": "P3+Pz+P4", "legend": true},
-                      {"type": "span-trace", "legend": true}
+                      {"type": "span-trace", "legend": true},
+                      {"type": "span-trace", "trace": "diss", "window_ms": [250, 450]}
                     ]},
                     {"panels": [
                       {"type": "map-strip", "condition": "rare", "windows_ms": [[250, 300], [300, 350], [350, 400], [400, 450]],

@@ -24,6 +24,7 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.meridian.figure.ExportFormat;
 import org.meridian.figure.Figures;
 import org.meridian.figure.spec.FigureSpec;
 import org.meridian.figure.spec.Polarity;
@@ -100,6 +101,14 @@ class FigureComposerGuiTest {
                 && !frame.workbench().tasks().isRunning("figure.preview"));
         assertThat(read(() -> dialog.preview().figure().widthMm())).isEqualTo(175);
         assertThat(read(() -> dialog.preview().getPreferredSize().width)).isPositive();
+        // the preview is an image drawn in the background at the screen's pixels per point
+        int trueSize = read(() -> dialog.preview().image().getWidth());
+        double expected = read(() -> 175 * dialog.preview().devicePixelsPerPoint() * ExportFormat.PT_PER_MM);
+        assertThat((double) trueSize).isCloseTo(Math.ceil(expected), org.assertj.core.api.Assertions.within(1.0));
+        composer.comboBox("figure.zoom").selectItem("200 %");
+        waitFor("the preview at 200 %", () -> dialog.preview().image().getWidth() > 1.9 * trueSize
+                && !frame.workbench().tasks().isRunning("figure.preview"));
+        composer.comboBox("figure.zoom").selectItem("100 % (true size)");
 
         Path svg = dir.resolve("late peak.svg");
         composer.textBox("figure.file").setText(svg.toString());
