@@ -196,7 +196,7 @@ class WindowDetailsGuiTest {
                 .isEqualTo("Processed: low-pass 8 Hz, Butterworth order 4, zero-phase");
         // a figure composed from this view says the same and applies it to the loaded study itself
         assertThat(read(() -> FigureFromView.build(state(), frame.workbench().model(),
-                FigureFromView.suggested(state(), 6), "study").processingValue()))
+                FigureFromView.suggested(state(), 6, WaveformMode.ONE_CHANNEL), "study").processingValue()))
                 .isEqualTo(read(() -> state().processing()));
         double[] after = read(WindowDetailsGuiTest::plotted);
         assertThat(after).hasSameSizeAs(before).isNotEqualTo(before);
