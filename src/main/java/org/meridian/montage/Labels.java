@@ -1,6 +1,7 @@
 package org.meridian.montage;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
@@ -132,11 +133,20 @@ public final class Labels {
         if (isNonScalp(label)) {
             return Optional.empty();
         }
+        return nearest(label, TYPO_TARGETS);
+    }
+
+    /**
+     * The candidate closest to a label (ignoring case) when it is close enough to be a likely
+     * typo: at most one edit for labels shorter than five characters, two for longer ones; the
+     * first of equally close candidates.
+     */
+    public static Optional<String> nearest(String label, Collection<String> candidates) {
         String wanted = label.trim().toLowerCase(Locale.ROOT);
         int limit = wanted.length() >= 5 ? 2 : 1;
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
-        for (String candidate : TYPO_TARGETS) {
+        for (String candidate : candidates) {
             int d = editDistance(wanted, candidate.toLowerCase(Locale.ROOT));
             if (d < bestDistance) {
                 bestDistance = d;
