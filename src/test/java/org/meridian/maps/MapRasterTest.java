@@ -78,7 +78,8 @@ class MapRasterTest {
                 assertThat(argb[row * 128 + col] != 0).isEqualTo(inHead);
             }
         }
-        // a dipole toward the left ear: the left edge takes the warm end, the right edge the cool end
+        // a centred dipole toward the left ear: V = 3 p cosθ / (4πσR²) (bioelectric field textbook)
+        // is positive on the left, drawn on the left (common practice): warm left edge, cool right
         int leftEdge = argb[64 * 128 + (int) Math.round(g.column(-0.95))];
         int rightEdge = argb[64 * 128 + (int) Math.round(g.column(0.95))];
         assertThat((leftEdge >> 16) & 0xff).isGreaterThan(leftEdge & 0xff);
