@@ -27,7 +27,8 @@ import org.meridian.core.Electrode;
  * <p>Typo guesses aim only at positions found on real caps: the 10-5 names without the rows
  * below the 10 % ring (N, NFp, OI, I; Nz and Iz stay), plus the old names. Reference and
  * non-scalp channels (earlobes A1/A2, mastoids M1/M2, EOG, ECG, EMG, external and status
- * channels) are recognised and get no guess, since "M1" is no misspelling of "C1".
+ * channels) are recognised and get no guess, since "M1" is no misspelling of "C1"; nor do a
+ * geodesic net's numbered channels (E1 … E256).
  */
 public final class Labels {
     /** Old 10-20 names and their ACNS (2006) equivalents. */
@@ -45,6 +46,8 @@ public final class Labels {
     private static final Pattern NON_SCALP = Pattern.compile(
             "^(a[12]|m[12]|lm|rm|nose|ref|gnd|ground|[lis]o[12]|exg\\d*|ext\\d*|aux\\d*|status|trig(ger)?\\d*"
                     + "|resp\\w*|gsr\\w*)$|eog|ecg|ekg|emg");
+    /** A geodesic net's channel numbering (E1 … E256): scalp channels, but no misspelt 10-5 names. */
+    private static final Pattern NET_NUMBER = Pattern.compile("^e\\d+$");
     private static final List<String> TYPO_TARGETS = typoTargets();
 
     private Labels() {
@@ -127,10 +130,11 @@ public final class Labels {
     /**
      * The standard label (or alias) closest to an unknown label, when it is close enough to be a
      * likely typo: at most one edit for short labels, two for labels of five or more characters.
-     * Reference and non-scalp channels ({@link #isNonScalp}) get no guess.
+     * Reference and non-scalp channels ({@link #isNonScalp}) and a geodesic net's numbered
+     * channels (E3 is no slip for F3) get no guess.
      */
     public static Optional<String> likelyIntended(String label) {
-        if (isNonScalp(label)) {
+        if (isNonScalp(label) || NET_NUMBER.matcher(label.trim().toLowerCase(Locale.ROOT)).matches()) {
             return Optional.empty();
         }
         return nearest(label, TYPO_TARGETS);
