@@ -83,7 +83,8 @@ class LabelsTest {
         }
         for (String label : StandardSystem.labels10_5()) {
             assertThat(Labels.isNonScalp(label)).as(label).isFalse();
-        }        // common practice: geodesic nets number their channels E1 … E256; E3 is no slip for F3
+        }
+        // common practice: geodesic nets number their channels E1 … E256; E3 is no slip for F3
         for (String label : List.of("E1", "E3", "E10", "e7")) {
             assertThat(Labels.likelyIntended(label)).as(label).isEmpty();
         }
