@@ -9,6 +9,7 @@ import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.figure.ExportFormat;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.maps.ColourLimits;
 import org.meridian.maps.ColourScales;
@@ -112,6 +113,7 @@ final class MapsCommand implements Callable<Integer> {
         MapExtent mapExtent = MapExtent.parse(extent);
 
         Study in = StudyLoader.load(study);
+        OutputGuard.requireNotInput(in, "-o", output);
         Waveforms average = grandAverage(in, condition);
         MapMaker maker = MapMaker.of(in.montage(), spline.parameters(), csd ? Quantity.CSD : Quantity.POTENTIAL,
                 mapExtent, resolution);

@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.io.AtomicFiles;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.measure.MeasureRequest;
 import org.meridian.measure.MeasureSettings;
@@ -122,6 +123,7 @@ final class MeasureCommand implements Callable<Integer> {
         channels.forEach(request::channel);
 
         Study loaded = StudyLoader.load(study);
+        OutputGuard.requireNotInput(loaded, "-o", output);
         Study data = baseline == null ? loaded : withBaseline(loaded);
         for (ConditionWave c : conditionWaves(data)) {
             request.condition(c);

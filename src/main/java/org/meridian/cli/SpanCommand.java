@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.io.AtomicFiles;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.TimeWindow;
@@ -114,6 +115,8 @@ final class SpanCommand implements Callable<Integer> {
             settings = settings.withReferenceMs(referenceTime);
         }
         Study s = StudyLoader.load(study);
+        OutputGuard.requireNotInput(s, "-o", output);
+        OutputGuard.requireNotInput(s, "--matrix", matrix);
         ConditionExpression expression = OptionErrors.about("--condition", () -> ConditionExpression.parse(condition, s));
         SpanReport report = SpanAnalysis.run(s, expression.name(),
                 p -> expression.forParticipant(s, p), settings, Progress.NONE);

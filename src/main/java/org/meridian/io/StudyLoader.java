@@ -1,5 +1,6 @@
 package org.meridian.io;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -17,6 +18,7 @@ import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.BooleanSupplier;
 import org.meridian.core.BadInputException;
+import org.meridian.core.InputFile;
 import org.meridian.core.Montage;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
@@ -84,12 +86,28 @@ public final class StudyLoader {
     public static Study load(Path path, Progress progress) {
         Path file = studyFile(path);
         Kind kind = detect(file);
+        List<InputFile> inputs = new ArrayList<>();
         List<Cell> cells = switch (kind) {
-            case MANIFEST -> manifestCells(file, progress);
-            case WAVEFORM_FILE -> singleFileCells(file, progress);
-            case LONG_TABLE -> longTableCells(file, progress);
+            case MANIFEST -> manifestCells(file, progress, inputs);
+            case WAVEFORM_FILE -> singleFileCells(file, progress, inputs);
+            case LONG_TABLE -> longTableCells(file, progress, inputs);
         };
-        return assemble(path.toString(), cells, montageBeside(file));
+        Path montage = montageBeside(file);
+        if (montage != null) {
+            inputs.add(inputFile(montage, InputFile.Role.MONTAGE));
+        }
+        return assemble(path.toString(), cells, montage, inputs);
+    }
+
+    /** A file read, by its real path (links resolved), so outputs can be checked against it. */
+    private static InputFile inputFile(Path file, InputFile.Role role) {
+        Path real;
+        try {
+            real = file.toRealPath();
+        } catch (IOException e) {
+            real = file.toAbsolutePath().normalize();
+        }
+        return new InputFile(real, role, TextInput.isGzip(file));
     }
 
     /** The kind of a STUDY argument (a folder counts as its manifest). */
@@ -147,8 +165,10 @@ public final class StudyLoader {
             String source) {
     }
 
-    private static List<Cell> manifestCells(Path manifest, Progress progress) {
+    private static List<Cell> manifestCells(Path manifest, Progress progress,
+            List<InputFile> inputs) {
         List<ManifestReader.Row> rows = ManifestReader.read(manifest);
+        inputs.add(inputFile(manifest, InputFile.Role.MANIFEST));
         List<Path> files = new ArrayList<>(rows.size());
         for (ManifestReader.Row r : rows) {
             files.add(r.file());
@@ -160,22 +180,27 @@ public final class StudyLoader {
             cells.add(new Cell(r.participant(), r.condition(), loaded[i], r.trials(),
                     r.file() + " (participant " + r.participant() + ", condition "
                             + r.condition() + ")"));
+            inputs.add(inputFile(r.file(), InputFile.Role.WAVEFORMS));
         }
         return cells;
     }
 
-    private static List<Cell> singleFileCells(Path file, Progress progress) {
+    private static List<Cell> singleFileCells(Path file, Progress progress,
+            List<InputFile> inputs) {
         progress.update(0, 1);
         Waveforms w = WaveformReader.read(file, progress::cancelled);
         progress.update(1, 1);
+        inputs.add(inputFile(file, InputFile.Role.WAVEFORMS));
         String stem = stem(file);
         return List.of(new Cell(stem, stem, w, -1, file.toString()));
     }
 
-    private static List<Cell> longTableCells(Path file, Progress progress) {
+    private static List<Cell> longTableCells(Path file, Progress progress,
+            List<InputFile> inputs) {
         progress.update(0, 1);
         List<LongTableReader.Cell> read = LongTableReader.read(file, progress::cancelled);
         progress.update(1, 1);
+        inputs.add(inputFile(file, InputFile.Role.LONG_TABLE));
         List<Cell> cells = new ArrayList<>(read.size());
         for (LongTableReader.Cell c : read) {
             cells.add(new Cell(c.participant(), c.condition(), c.waveforms(), -1, file.toString()
@@ -261,10 +286,11 @@ public final class StudyLoader {
     }
 
     /** Checks the cells agree, orders their channels alike, and finds the positions. */
-    private static Study assemble(String name, List<Cell> cells, Path montageFile) {
+    private static Study assemble(String name, List<Cell> cells, Path montageFile,
+            List<InputFile> inputs) {
         Cell first = cells.get(0);
         Waveforms reference = first.waveforms();
-        Study.Builder builder = Study.builder(name);
+        Study.Builder builder = Study.builder(name).inputFiles(inputs);
         List<Cell> ordered = new ArrayList<>(cells.size());
         for (Cell c : cells) {
             Waveforms w = c.waveforms();
