@@ -20,6 +20,7 @@ import java.util.function.BooleanSupplier;
 import org.meridian.core.BadInputException;
 import org.meridian.core.InputFile;
 import org.meridian.core.Montage;
+import org.meridian.core.SamePositionException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.montage.ChannelPositions;
@@ -162,7 +163,7 @@ public final class StudyLoader {
 
     /** One loaded participant × condition and the file it came from (for messages). */
     private record Cell(String participant, String condition, Waveforms waveforms, int trials,
-            String source) {
+            String source, Path file) {
     }
 
     private static List<Cell> manifestCells(Path manifest, Progress progress,
@@ -179,7 +180,7 @@ public final class StudyLoader {
             ManifestReader.Row r = rows.get(i);
             cells.add(new Cell(r.participant(), r.condition(), loaded[i], r.trials(),
                     r.file() + " (participant " + r.participant() + ", condition "
-                            + r.condition() + ")"));
+                            + r.condition() + ")", r.file()));
             inputs.add(inputFile(r.file(), InputFile.Role.WAVEFORMS));
         }
         return cells;
@@ -192,7 +193,7 @@ public final class StudyLoader {
         progress.update(1, 1);
         inputs.add(inputFile(file, InputFile.Role.WAVEFORMS));
         String stem = stem(file);
-        return List.of(new Cell(stem, stem, w, -1, file.toString()));
+        return List.of(new Cell(stem, stem, w, -1, file.toString(), file));
     }
 
     private static List<Cell> longTableCells(Path file, Progress progress,
@@ -204,7 +205,8 @@ public final class StudyLoader {
         List<Cell> cells = new ArrayList<>(read.size());
         for (LongTableReader.Cell c : read) {
             cells.add(new Cell(c.participant(), c.condition(), c.waveforms(), -1, file.toString()
-                    + " (participant " + c.participant() + ", condition " + c.condition() + ")"));
+                    + " (participant " + c.participant() + ", condition " + c.condition() + ")",
+                    file));
         }
         return cells;
     }
@@ -297,7 +299,7 @@ public final class StudyLoader {
             if (sameSetAxisUnit(reference, w)) {
                 ordered.add(new Cell(c.participant(), c.condition(), w.labels().equals(
                         reference.labels()) ? w : w.reorderedLike(reference), c.trials(),
-                        c.source()));
+                        c.source(), c.file()));
             } else {
                 throw new BadInputException(name + ": " + first.source() + " and " + c.source()
                         + " have " + reference.describeLayoutDifference(w));
@@ -307,6 +309,8 @@ public final class StudyLoader {
         ChannelPositions.Resolution res;
         try {
             res = ChannelPositions.resolve(reference.labels(), fromFile);
+        } catch (SamePositionException e) {
+            throw samePlace(first, e);
         } catch (BadInputException e) {
             throw new BadInputException(first.source() + ": the channels cannot all be placed: "
                     + e.getMessage(), e);
@@ -316,6 +320,24 @@ public final class StudyLoader {
             builder.add(c.participant(), c.condition(), c.waveforms(), c.trials());
         }
         return builder.build();
+    }
+
+    /**
+     * Two data labels that resolve to one position (T3 and T7, say), named where the first file
+     * gives them: the header columns, or the rows of a channels-as-rows file.
+     */
+    private static BadInputException samePlace(Cell first, SamePositionException e) {
+        int[] a = WaveformReader.labelPlace(first.file(), e.first());
+        int[] b = WaveformReader.labelPlace(first.file(), e.second());
+        String problem = "channels " + e.first() + " and " + e.second() + " take the same"
+                + " position (from " + e.source() + "); keep one of them or give positions in a "
+                + MONTAGE_NAME + " beside the data";
+        if (a == null || b == null) {
+            return new BadInputException(first.source() + ": " + problem, e);
+        }
+        String where = a[0] == b[0] ? "line " + a[0] + " columns " + a[1] + " and " + b[1]
+                : "lines " + a[0] + " and " + b[0] + " column " + a[1];
+        return new BadInputException(first.file() + " " + where + ": " + problem, e);
     }
 
     private static boolean sameSetAxisUnit(Waveforms a, Waveforms b) {

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
@@ -64,5 +65,19 @@ class InputFilesTest {
                     .isInstanceOf(IllegalArgumentException.class);
         }
         assertThat(dir.resolve("x")).doesNotExist();
+    }
+
+    @Test
+    void infoWarnsWhenChannelsMissingFromTheMontageFileTookTemplatePositions() throws Exception {
+        Path data = Files.writeString(dir.resolve("d.tsv"), "time_ms\tFz\tCz\tPz\tT3\tEOG\n0\t1\t1\t1\t1\t1\n"
+                + "4\t2\t2\t2\t2\t2\n");
+        Files.writeString(dir.resolve(StudyLoader.MONTAGE_NAME), "label\ttheta\tphi\nFz\t45\t90\nCz\t0\t0\n");
+        List<String> lines = StudySummary.lines(StudyLoader.load(data), StudyLoader.Kind.WAVEFORM_FILE);
+        assertThat(lines).contains("warning: 2 channels are not in the montage file and took standard 10-5"
+                + " (template) positions, mixed with the measured ones: Pz, T3");
+        // without a montage file the standard positions are the expected source: no such warning
+        Files.delete(dir.resolve(StudyLoader.MONTAGE_NAME));
+        assertThat(StudySummary.lines(StudyLoader.load(data), StudyLoader.Kind.WAVEFORM_FILE))
+                .noneMatch(l -> l.contains("template"));
     }
 }
