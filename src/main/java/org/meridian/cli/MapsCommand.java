@@ -11,6 +11,7 @@ import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.figure.ExportFormat;
 import org.meridian.figure.spec.FigureWidth;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.maps.ColourLimits;
 import org.meridian.maps.ColourScales;
@@ -122,7 +123,9 @@ final class MapsCommand implements Callable<Integer> {
         MapExtent mapExtent = OptionErrors.about("--extent", () -> MapExtent.parse(extent));
         double width = widthMm == null ? 0 : OptionErrors.about("--width-mm", () -> FigureWidth.mm(widthMm)).mm();
 
-        Study in = processing.apply(StudyLoader.load(study), spec.commandLine().getOut());
+        Study loaded = StudyLoader.load(study);
+        OutputGuard.requireNotInput(loaded, "-o", output);
+        Study in = processing.apply(loaded, spec.commandLine().getOut());
         requireAffordable(in.montage().size());
         requireOnMaps(in, highlight);
         Waveforms average = grandAverage(in, condition);
