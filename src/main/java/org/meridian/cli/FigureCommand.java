@@ -4,9 +4,14 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.meridian.core.Study;
 import org.meridian.figure.ExportFormat;
 import org.meridian.figure.FigureDrawing;
 import org.meridian.figure.Figures;
+import org.meridian.figure.spec.FigureSpec;
+import org.meridian.figure.spec.SpecFiles;
+import org.meridian.io.OutputGuard;
+import org.meridian.io.StudyLoader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -41,7 +46,10 @@ final class FigureCommand implements Callable<Integer> {
         if (format.isRaster()) {
             ExportFormat.requireDpi(dpi, "option --dpi");
         }
-        FigureDrawing figure = Figures.load(specFile);
+        FigureSpec figureSpec = SpecFiles.read(specFile);
+        Study study = StudyLoader.load(Figures.studyPath(figureSpec, specFile));
+        OutputGuard.requireNotInput(study, "-o", output, specFile, "the figure spec");
+        FigureDrawing figure = Figures.draw(specFile, figureSpec, study);
         Figures.export(figure, output, dpi);
         PrintWriter out = spec.commandLine().getOut();
         out.println("output: " + output);

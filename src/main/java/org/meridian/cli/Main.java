@@ -52,8 +52,16 @@ public final class Main implements Runnable {
 
     /** Runs one command line, writing to the given streams; returns the exit code. */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        return run(args, out, err, new Object[0]);
+    }
+
+    /** As {@link #run(String[], PrintWriter, PrintWriter)}, with further subcommands (for tests). */
+    static int run(String[] args, PrintWriter out, PrintWriter err, Object... extraSubcommands) {
         Main main = new Main();
         CommandLine cl = new CommandLine(main);
+        for (Object sub : extraSubcommands) {
+            cl.addSubcommand(sub);
+        }
         cl.setOut(out);
         cl.setErr(err);
         cl.setParameterExceptionHandler((ex, a) -> {
@@ -69,15 +77,28 @@ public final class Main implements Runnable {
                 }
                 return EXIT_BAD_INPUT;
             }
-            err.println("error: internal failure: " + oneLine(String.valueOf(ex)));
             if (wantTrace) {
+                err.println("error: internal failure: " + oneLine(String.valueOf(ex)));
                 ex.printStackTrace(err);
             } else {
-                err.println("(run again with --debug for details)");
+                err.println("error: internal failure: " + oneLine(String.valueOf(ex))
+                        + " (run again with --debug for details)");
             }
             return EXIT_INTERNAL;
         });
-        int code = cl.execute(args);
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            // picocli hands on Errors; the big arrays are unreachable by now, so printing works
+            err.println("error: out of memory (" + Runtime.getRuntime().maxMemory() / (1 << 20)
+                    + " MiB allowed): ask for less (e.g. a smaller --resolution) or give Java more"
+                    + " memory (java -Xmx4g -jar meridian.jar …)");
+            if (java.util.Arrays.asList(args).contains("--debug")) {
+                e.printStackTrace(err);
+            }
+            code = EXIT_INTERNAL;
+        }
         out.flush();
         err.flush();
         return code;

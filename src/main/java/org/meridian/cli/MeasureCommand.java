@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.io.AtomicFiles;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.measure.MeasureRequest;
 import org.meridian.measure.MeasureSettings;
@@ -125,7 +126,9 @@ final class MeasureCommand implements Callable<Integer> {
         }
         channels.forEach(request::channel);
 
-        Study loaded = processing.apply(StudyLoader.load(study), null);
+        Study read = StudyLoader.load(study);
+        OutputGuard.requireNotInput(read, "-o", output);
+        Study loaded = processing.apply(read, null);
         Study data = baseline == null ? loaded : withBaseline(loaded);
         for (ConditionWave c : conditionWaves(data)) {
             request.condition(c);

@@ -3,9 +3,9 @@ package org.meridian.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
-import org.meridian.io.AtomicFiles;
 import org.meridian.io.StudyWriter;
 import org.meridian.sim.ListeningDemo;
 import org.meridian.sim.Scenario;
@@ -27,6 +27,8 @@ import picocli.CommandLine.Spec;
                 + "a homogeneous sphere plus 1/f background) and write it as a study folder with "
                 + "its ground truth (truth.json). The defaults reproduce the bundled demo study.")
 final class SimulateCommand implements Callable<Integer> {
+    static final String TRUTH_FILE = "truth.json";
+
     @Spec
     CommandSpec spec;
 
@@ -75,8 +77,9 @@ final class SimulateCommand implements Callable<Integer> {
         Scenario scenario = ListeningDemo.scenario(participants);
         scenario = scenario.withNoise(scenario.noise().scaled(noiseScale));
         Simulation sim = Simulator.simulate(scenario, seed);
-        StudyWriter.write(sim.study(), output, new StudyWriter.Options(gzip, decimals, force));
-        AtomicFiles.writeString(output.resolve("truth.json"), TruthJson.of(sim.truth()));
+        // the truth goes into the folder before it is renamed into place: never a study without it
+        StudyWriter.write(sim.study(), output, new StudyWriter.Options(gzip, decimals, force),
+                Map.of(TRUTH_FILE, TruthJson.of(sim.truth())));
         PrintWriter out = spec.commandLine().getOut();
         out.println("study: " + output);
         out.println("participants: " + sim.study().participants().size());
@@ -85,7 +88,7 @@ final class SimulateCommand implements Callable<Integer> {
         out.println("samples: " + sim.study().axis().samples());
         out.println("seed: " + seed);
         out.println(String.format(Locale.ROOT, "noise_scale: %s", noiseScale));
-        out.println("truth: " + output.resolve("truth.json"));
+        out.println("truth: " + output.resolve(TRUTH_FILE));
         return Main.EXIT_OK;
     }
 }

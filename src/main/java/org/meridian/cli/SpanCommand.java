@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.io.AtomicFiles;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.TimeWindow;
@@ -116,7 +117,10 @@ final class SpanCommand implements Callable<Integer> {
         if (referenceTime != null) {
             settings = settings.withReferenceMs(referenceTime);
         }
-        Study s = processing.apply(StudyLoader.load(study), spec.commandLine().getErr());
+        Study read = StudyLoader.load(study);
+        OutputGuard.requireNotInput(read, "-o", output);
+        OutputGuard.requireNotInput(read, "--matrix", matrix);
+        Study s = processing.apply(read, spec.commandLine().getErr());
         ConditionExpression expression = OptionErrors.about("--condition", () -> ConditionExpression.parse(condition, s));
         SpanReport report = SpanAnalysis.run(s, expression.name(),
                 p -> expression.forParticipant(s, p), settings, Progress.NONE);

@@ -2,14 +2,15 @@ package org.meridian.cli;
 
 import java.nio.file.Path;
 import org.meridian.core.Study;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.io.StudyWriter;
 import picocli.CommandLine.Option;
 
 /**
  * The options of a command that writes a new study folder ({@code csd}, {@code repair}):
- * {@code -o DIR}, {@code --force} and {@code --decimals}, and the guard that keeps the output
- * away from the input.
+ * {@code -o DIR}, {@code --force}, {@code --decimals} and {@code --[no-]gzip}, and the guard
+ * that keeps the output away from every file the input was read from.
  */
 final class StudyOutputOptions {
     @Option(names = {"-o", "--output"}, required = true, paramLabel = "DIR", description = "The new study folder.")
@@ -22,14 +23,26 @@ final class StudyOutputOptions {
             description = "Digits after the decimal point of every written value (default ${DEFAULT-VALUE}).")
     int decimals;
 
-    /** Loads the input study after checking that the output folder cannot replace it. */
+    @Option(names = "--gzip", negatable = true,
+            description = "Write the waveform files gzip-compressed (.tsv.gz), or not (--no-gzip). "
+                    + "Default: like the input, compressed when all its waveform files are.")
+    Boolean gzip;
+
+    private Study input;
+
+    /**
+     * Loads the input study and refuses an output folder that holds any of its files or lies in
+     * its folder, so even {@code --force} never replaces an input.
+     */
     Study loadInput(Path studyArgument) {
-        StudyWriter.requireApartFromInput(studyArgument, output);
-        return StudyLoader.load(studyArgument);
+        input = StudyLoader.load(studyArgument);
+        OutputGuard.requireFolderApart(input, "-o", output);
+        return input;
     }
 
-    /** Writes the result, uncompressed, with the chosen decimals. */
+    /** Writes the result with the chosen decimals and compression. */
     void write(Study result) {
-        StudyWriter.write(result, output, new StudyWriter.Options(false, decimals, force));
+        boolean compress = gzip != null ? gzip : StudyWriter.compressedLikeInput(input);
+        StudyWriter.write(result, output, new StudyWriter.Options(compress, decimals, force));
     }
 }

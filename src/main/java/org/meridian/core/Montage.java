@@ -28,8 +28,8 @@ public final class Montage {
         for (Electrode e : this.electrodes) {
             Electrode previous = map.put(key(e.label()), e);
             if (previous != null) {
-                throw new BadInputException(this.source + ": electrode " + e.label()
-                        + " is listed twice");
+                throw new BadInputException((this.source.isEmpty() ? "" : this.source + ": ")
+                        + "electrode " + e.label() + " is listed twice");
             }
         }
         for (int i = 0; i < this.electrodes.size(); i++) {
@@ -37,8 +37,7 @@ public final class Montage {
                 Electrode a = this.electrodes.get(i);
                 Electrode b = this.electrodes.get(j);
                 if (a.cosineTo(b) > SAME_POSITION_COSINE) {
-                    throw new BadInputException(this.source + ": electrodes " + a.label() + " and "
-                            + b.label() + " are at the same position");
+                    throw new SamePositionException(this.source, a.label(), b.label());
                 }
             }
         }

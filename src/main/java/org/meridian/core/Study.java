@@ -23,6 +23,7 @@ public final class Study {
     private final int[][] trials;
     private final Montage montage;
     private final List<ChannelPlacement> placements;
+    private final List<InputFile> inputFiles;
 
     private Study(Builder b) {
         this.name = b.name;
@@ -60,6 +61,7 @@ public final class Study {
         }
         this.montage = b.montage == null ? new Montage(List.of(), "none") : b.montage;
         this.placements = b.placements == null ? List.of() : List.copyOf(b.placements);
+        this.inputFiles = List.copyOf(b.inputFiles);
     }
 
     public static Builder builder(String name) {
@@ -132,6 +134,15 @@ public final class Study {
         return placements;
     }
 
+    /**
+     * The files this study was read from (manifest, waveform files or long table, montage
+     * file), or those of the study it was derived from; empty for a study built in memory.
+     * Commands check their outputs against these, so no input is ever written over.
+     */
+    public List<InputFile> inputFiles() {
+        return inputFiles;
+    }
+
     /** The channels without a position, in channel order. */
     public List<String> unpositionedChannels() {
         List<String> out = new ArrayList<>();
@@ -148,7 +159,7 @@ public final class Study {
      * replaced cell by cell (e.g. by their CSD or after a channel repair).
      */
     public Study mapWaveforms(String newName, java.util.function.BiFunction<Integer, Integer, Waveforms> f) {
-        Builder b = builder(newName).montage(montage).placements(placements);
+        Builder b = builder(newName).montage(montage).placements(placements).inputFiles(inputFiles);
         for (int p = 0; p < participants.size(); p++) {
             for (int c = 0; c < conditions.size(); c++) {
                 b.add(participants.get(p), conditions.get(c), f.apply(p, c), trials[p][c]);
@@ -181,6 +192,7 @@ public final class Study {
         private final Map<String, Entry> entries = new LinkedHashMap<>();
         private Montage montage;
         private List<ChannelPlacement> placements;
+        private List<InputFile> inputFiles = List.of();
 
         private Builder(String name) {
             this.name = Objects.requireNonNull(name);
@@ -214,6 +226,12 @@ public final class Study {
 
         public Builder placements(List<ChannelPlacement> p) {
             this.placements = p;
+            return this;
+        }
+
+        /** The files the study is read from (see {@link Study#inputFiles()}). */
+        public Builder inputFiles(List<InputFile> files) {
+            this.inputFiles = List.copyOf(files);
             return this;
         }
 

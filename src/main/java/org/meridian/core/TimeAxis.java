@@ -129,9 +129,13 @@ public final class TimeAxis {
         return o instanceof TimeAxis t && sameAs(t);
     }
 
+    /**
+     * Only the sample count: equality allows a tolerance on the rate and first time, so no
+     * rounding of those could keep equal axes in one hash bucket.
+     */
     @Override
     public int hashCode() {
-        return 31 * samples + Long.hashCode(Math.round(rateHz * 1000));
+        return Integer.hashCode(samples);
     }
 
     @Override

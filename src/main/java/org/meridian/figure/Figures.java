@@ -48,10 +48,16 @@ public final class Figures {
      */
     public static FigureDrawing load(Path specFile) {
         FigureSpec spec = SpecFiles.read(specFile);
-        Path study = studyPath(spec, specFile);
-        Study loaded = StudyLoader.load(study);
+        return draw(specFile, spec, StudyLoader.load(studyPath(spec, specFile)));
+    }
+
+    /**
+     * Computes the figure of a spec read from {@code specFile} and its study, loaded by the
+     * caller (which may check the study's input files first); problems name the spec file.
+     */
+    public static FigureDrawing draw(Path specFile, FigureSpec spec, Study study) {
         try {
-            return draw(spec, loaded);
+            return draw(spec, study);
         } catch (BadInputException e) {
             throw new BadInputException(specFile + ": " + e.getMessage(), e);
         }

@@ -316,7 +316,7 @@ final class LineScanner implements Closeable {
     double number(int cell) {
         int s = starts[cell];
         int e = ends[cell];
-        if (e > s && !isPlainNumberEdge(buf[s], buf[e - 1])) {
+        if (e > s && !isPlainDecimal(buf, s, e)) {
             return numberSlow(cell);
         }
         if (e > s) {
@@ -339,15 +339,26 @@ final class LineScanner implements Closeable {
     float value(int cell, double factor) {
         int s = starts[cell];
         int e = ends[cell];
-        if (e > s && isPlainNumberEdge(buf[s], buf[e - 1])) {
+        if (e > s && isPlainDecimal(buf, s, e)) {
+            double d = Double.NaN;
             try {
-                float v = factor == 1.0 ? JavaFloatParser.parseFloat(buf, s, e - s)
-                        : (float) (JavaDoubleParser.parseDouble(buf, s, e - s) * factor);
-                if (Float.isFinite(v)) {
-                    return v;
+                if (factor == 1.0) {
+                    float v = JavaFloatParser.parseFloat(buf, s, e - s);
+                    if (Float.isFinite(v)) {
+                        return v;
+                    }
+                } else {
+                    d = JavaDoubleParser.parseDouble(buf, s, e - s);
+                    float v = (float) (d * factor);
+                    if (Float.isFinite(v)) {
+                        return v;
+                    }
                 }
             } catch (NumberFormatException ignored) {
                 // described below
+            }
+            if (Double.isFinite(d)) {
+                throw convertedOutOfRange(cell);
             }
             throw numberError(cell);
         }
@@ -355,7 +366,14 @@ final class LineScanner implements Closeable {
         if (Float.isFinite((float) v)) {
             return (float) v;
         }
-        throw error(cell + 1, quote(text(cell)) + " is out of range");
+        throw factor == 1.0 ? error(cell + 1, quote(text(cell)) + " is out of range")
+                : convertedOutOfRange(cell);
+    }
+
+    /** A number that fits a double but not, once converted to µV, a float. */
+    private ReadException convertedOutOfRange(int cell) {
+        return error(cell + 1, quote(text(cell)) + " is out of range after conversion to µV"
+                + " (values must stay within ±3.4e38 µV)");
     }
 
     /** A cell's number when it has blanks or quotes around it. */
@@ -365,7 +383,7 @@ final class LineScanner implements Closeable {
             throw error(cell + 1, "empty cell where a number is expected");
         }
         byte[] b = t.getBytes(StandardCharsets.UTF_8);
-        if (isPlainNumberEdge(b[0], b[b.length - 1])) {
+        if (isPlainDecimal(b, 0, b.length)) {
             try {
                 double v = JavaDoubleParser.parseDouble(b, 0, b.length);
                 if (Double.isFinite(v)) {
@@ -379,17 +397,52 @@ final class LineScanner implements Closeable {
     }
 
     /**
-     * A plain decimal number starts with a digit, a sign or a point and ends with a digit or a
-     * point; this keeps out the type suffixes ({@code 1.5f}) the Java syntax would allow.
+     * Whether {@code b[s, e)} is a plain decimal number, the only form the files may use:
+     * {@code [+-]? (digits [. digits?] | . digits) ([eE] [+-]? digits)?}. This keeps out what
+     * the Java syntax the parser follows would also allow: hexadecimal ({@code 0x1p3}), type
+     * suffixes ({@code 1.5f}), {@code NaN} and {@code Infinity}.
      */
-    private static boolean isPlainNumberEdge(byte first, byte last) {
-        boolean firstOk = (first >= '0' && first <= '9') || first == '-' || first == '+'
-                || first == '.';
-        boolean lastOk = (last >= '0' && last <= '9') || last == '.';
-        return firstOk && lastOk;
+    static boolean isPlainDecimal(byte[] b, int s, int e) {
+        int i = s;
+        if (i < e && (b[i] == '+' || b[i] == '-')) {
+            i++;
+        }
+        int digits = 0;
+        while (i < e && b[i] >= '0' && b[i] <= '9') {
+            i++;
+            digits++;
+        }
+        if (i < e && b[i] == '.') {
+            i++;
+            while (i < e && b[i] >= '0' && b[i] <= '9') {
+                i++;
+                digits++;
+            }
+        }
+        if (digits == 0) {
+            return false;
+        }
+        if (i < e && (b[i] == 'e' || b[i] == 'E')) {
+            i++;
+            if (i < e && (b[i] == '+' || b[i] == '-')) {
+                i++;
+            }
+            int exponent = 0;
+            while (i < e && b[i] >= '0' && b[i] <= '9') {
+                i++;
+                exponent++;
+            }
+            if (exponent == 0) {
+                return false;
+            }
+        }
+        return i == e;
     }
 
     private ReadException numberError(int cell) {
+        if (isComment()) {
+            return commentAfterHeader();
+        }
         String t = text(cell);
         if (t.isEmpty()) {
             return error(cell + 1, "empty cell where a number is expected");
@@ -413,6 +466,12 @@ final class LineScanner implements Closeable {
                     + " point)");
         }
         return error(cell + 1, quote(t) + " is not a number");
+    }
+
+    /** A {@code #} line among the data rows: comments belong before the header only. */
+    ReadException commentAfterHeader() {
+        return error(1, "a comment line after the header; comment lines (#) may only come"
+                + " before the header");
     }
 
     ReadException error(int column, String problem) {

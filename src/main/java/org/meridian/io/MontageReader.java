@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import org.meridian.core.Electrode;
 import org.meridian.core.Montage;
+import org.meridian.core.SamePositionException;
 import org.meridian.montage.SphereFit;
 
 /**
@@ -95,7 +96,11 @@ public final class MontageReader {
         if (labels.isEmpty()) {
             throw new ReadException(name, pre.headerLine(), 0, "a header but no electrodes");
         }
-        return SphereFit.montageFromMeasured(labels, points.toArray(new double[0][]), name);
+        try {
+            return SphereFit.montageFromMeasured(labels, points.toArray(new double[0][]), name);
+        } catch (SamePositionException e) {
+            throw samePosition(name, e, labelLines);
+        }
     }
 
     private static Montage spherical(LineScanner sc, Preamble pre, int il, int it, int ip,
@@ -116,7 +121,22 @@ public final class MontageReader {
         if (electrodes.isEmpty()) {
             throw new ReadException(name, pre.headerLine(), 0, "a header but no electrodes");
         }
-        return new Montage(electrodes, name);
+        try {
+            return new Montage(electrodes, name);
+        } catch (SamePositionException e) {
+            throw samePosition(name, e, labelLines);
+        }
+    }
+
+    /**
+     * Two electrodes whose directions coincide (after the sphere fit, for measured positions),
+     * named with their lines.
+     */
+    private static ReadException samePosition(String name, SamePositionException e,
+            Map<String, Integer> labelLines) {
+        return new ReadException(name, labelLines.get(Montage.key(e.second())), 0, "electrode "
+                + e.second() + " is at the same position as " + e.first() + " (line "
+                + labelLines.get(Montage.key(e.first())) + ")");
     }
 
     /** Whether the current line is a data row of the right width; false for a blank line. */

@@ -12,6 +12,9 @@ import org.meridian.core.TimeAxis;
  * of a whole number of hertz is taken as that number. A first time within 0.1 % of a step of a
  * whole number of steps from 0 ms is taken as exactly that (an epoch sampled in step with its
  * event at 0 ms, written with rounded times), so reading and writing again changes nothing.
+ * A rate outside {@value #MIN_RATE_HZ} Hz to {@value #MAX_RATE_HZ} Hz is refused as implausible
+ * for averaged ERPs: it almost always means times in seconds under a {@code time_ms} header (or
+ * the reverse), or times written with too few decimals.
  */
 final class Sampling {
     /** Allowed deviation of any step from the median step. */
@@ -20,6 +23,10 @@ final class Sampling {
     private static final double ON_GRID_TOLERANCE = STEP_TOLERANCE;
     /** Times are kept to this many ms, hiding the binary noise of converting seconds. */
     private static final double TIME_GRID_MS = 1e-9;
+    /** The lowest sampling rate accepted (a 1 s step). */
+    static final double MIN_RATE_HZ = 1;
+    /** The highest sampling rate accepted (a 10 µs step; brainstem recordings reach this). */
+    static final double MAX_RATE_HZ = 100_000;
 
     private Sampling() {
     }
@@ -37,6 +44,11 @@ final class Sampling {
     static TimeAxis axis(double[] timesMs, int n, Where where) {
         if (n < 2) {
             throw where.at(0, "only one sample: at least two are needed to know the sampling rate");
+        }
+        for (int i = 0; i < n; i++) {
+            if (!Double.isFinite(timesMs[i])) {
+                throw where.at(i, "the time is out of range after conversion to ms");
+            }
         }
         double[] steps = new double[n - 1];
         for (int i = 0; i < n - 1; i++) {
@@ -60,6 +72,14 @@ final class Sampling {
             }
         }
         double rate = 1000.0 * (n - 1) / (timesMs[n - 1] - timesMs[0]);
+        if (!(rate >= MIN_RATE_HZ && rate <= MAX_RATE_HZ)) {
+            String given = Double.isFinite(rate) ? String.format(Locale.ROOT, "%.4g Hz", rate)
+                    : "infinite";
+            throw where.at(1, "a step of " + String.format(Locale.ROOT, "%.4g", median)
+                    + " ms gives an implausible sampling rate (" + given + "); expected "
+                    + (int) MIN_RATE_HZ + " to " + (int) MAX_RATE_HZ + " Hz: are the times in ms"
+                    + " under time_ms and in seconds under time_s?");
+        }
         double whole = Math.rint(rate);
         if (Math.abs(rate - whole) <= WHOLE_HZ_TOLERANCE * rate) {
             rate = whole;

@@ -1,5 +1,6 @@
 package org.meridian.io;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -17,7 +18,9 @@ import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.BooleanSupplier;
 import org.meridian.core.BadInputException;
+import org.meridian.core.InputFile;
 import org.meridian.core.Montage;
+import org.meridian.core.SamePositionException;
 import org.meridian.core.Study;
 import org.meridian.core.Waveforms;
 import org.meridian.montage.ChannelPositions;
@@ -84,12 +87,28 @@ public final class StudyLoader {
     public static Study load(Path path, Progress progress) {
         Path file = studyFile(path);
         Kind kind = detect(file);
+        List<InputFile> inputs = new ArrayList<>();
         List<Cell> cells = switch (kind) {
-            case MANIFEST -> manifestCells(file, progress);
-            case WAVEFORM_FILE -> singleFileCells(file, progress);
-            case LONG_TABLE -> longTableCells(file, progress);
+            case MANIFEST -> manifestCells(file, progress, inputs);
+            case WAVEFORM_FILE -> singleFileCells(file, progress, inputs);
+            case LONG_TABLE -> longTableCells(file, progress, inputs);
         };
-        return assemble(path.toString(), cells, montageBeside(file));
+        Path montage = montageBeside(file);
+        if (montage != null) {
+            inputs.add(inputFile(montage, InputFile.Role.MONTAGE));
+        }
+        return assemble(path.toString(), cells, montage, inputs);
+    }
+
+    /** A file read, by its real path (links resolved), so outputs can be checked against it. */
+    private static InputFile inputFile(Path file, InputFile.Role role) {
+        Path real;
+        try {
+            real = file.toRealPath();
+        } catch (IOException e) {
+            real = file.toAbsolutePath().normalize();
+        }
+        return new InputFile(real, role, TextInput.isGzip(file));
     }
 
     /** The kind of a STUDY argument (a folder counts as its manifest). */
@@ -144,11 +163,13 @@ public final class StudyLoader {
 
     /** One loaded participant × condition and the file it came from (for messages). */
     private record Cell(String participant, String condition, Waveforms waveforms, int trials,
-            String source) {
+            String source, Path file) {
     }
 
-    private static List<Cell> manifestCells(Path manifest, Progress progress) {
+    private static List<Cell> manifestCells(Path manifest, Progress progress,
+            List<InputFile> inputs) {
         List<ManifestReader.Row> rows = ManifestReader.read(manifest);
+        inputs.add(inputFile(manifest, InputFile.Role.MANIFEST));
         List<Path> files = new ArrayList<>(rows.size());
         for (ManifestReader.Row r : rows) {
             files.add(r.file());
@@ -159,27 +180,33 @@ public final class StudyLoader {
             ManifestReader.Row r = rows.get(i);
             cells.add(new Cell(r.participant(), r.condition(), loaded[i], r.trials(),
                     r.file() + " (participant " + r.participant() + ", condition "
-                            + r.condition() + ")"));
+                            + r.condition() + ")", r.file()));
+            inputs.add(inputFile(r.file(), InputFile.Role.WAVEFORMS));
         }
         return cells;
     }
 
-    private static List<Cell> singleFileCells(Path file, Progress progress) {
+    private static List<Cell> singleFileCells(Path file, Progress progress,
+            List<InputFile> inputs) {
         progress.update(0, 1);
         Waveforms w = WaveformReader.read(file, progress::cancelled);
         progress.update(1, 1);
+        inputs.add(inputFile(file, InputFile.Role.WAVEFORMS));
         String stem = stem(file);
-        return List.of(new Cell(stem, stem, w, -1, file.toString()));
+        return List.of(new Cell(stem, stem, w, -1, file.toString(), file));
     }
 
-    private static List<Cell> longTableCells(Path file, Progress progress) {
+    private static List<Cell> longTableCells(Path file, Progress progress,
+            List<InputFile> inputs) {
         progress.update(0, 1);
         List<LongTableReader.Cell> read = LongTableReader.read(file, progress::cancelled);
         progress.update(1, 1);
+        inputs.add(inputFile(file, InputFile.Role.LONG_TABLE));
         List<Cell> cells = new ArrayList<>(read.size());
         for (LongTableReader.Cell c : read) {
             cells.add(new Cell(c.participant(), c.condition(), c.waveforms(), -1, file.toString()
-                    + " (participant " + c.participant() + ", condition " + c.condition() + ")"));
+                    + " (participant " + c.participant() + ", condition " + c.condition() + ")",
+                    file));
         }
         return cells;
     }
@@ -261,17 +288,18 @@ public final class StudyLoader {
     }
 
     /** Checks the cells agree, orders their channels alike, and finds the positions. */
-    private static Study assemble(String name, List<Cell> cells, Path montageFile) {
+    private static Study assemble(String name, List<Cell> cells, Path montageFile,
+            List<InputFile> inputs) {
         Cell first = cells.get(0);
         Waveforms reference = first.waveforms();
-        Study.Builder builder = Study.builder(name);
+        Study.Builder builder = Study.builder(name).inputFiles(inputs);
         List<Cell> ordered = new ArrayList<>(cells.size());
         for (Cell c : cells) {
             Waveforms w = c.waveforms();
             if (sameSetAxisUnit(reference, w)) {
                 ordered.add(new Cell(c.participant(), c.condition(), w.labels().equals(
                         reference.labels()) ? w : w.reorderedLike(reference), c.trials(),
-                        c.source()));
+                        c.source(), c.file()));
             } else {
                 throw new BadInputException(name + ": " + first.source() + " and " + c.source()
                         + " have " + reference.describeLayoutDifference(w));
@@ -281,6 +309,8 @@ public final class StudyLoader {
         ChannelPositions.Resolution res;
         try {
             res = ChannelPositions.resolve(reference.labels(), fromFile);
+        } catch (SamePositionException e) {
+            throw samePlace(first, e);
         } catch (BadInputException e) {
             throw new BadInputException(first.source() + ": the channels cannot all be placed: "
                     + e.getMessage(), e);
@@ -290,6 +320,24 @@ public final class StudyLoader {
             builder.add(c.participant(), c.condition(), c.waveforms(), c.trials());
         }
         return builder.build();
+    }
+
+    /**
+     * Two data labels that resolve to one position (T3 and T7, say), named where the first file
+     * gives them: the header columns, or the rows of a channels-as-rows file.
+     */
+    private static BadInputException samePlace(Cell first, SamePositionException e) {
+        int[] a = WaveformReader.labelPlace(first.file(), e.first());
+        int[] b = WaveformReader.labelPlace(first.file(), e.second());
+        String problem = "channels " + e.first() + " and " + e.second() + " take the same"
+                + " position (from " + e.source() + "); keep one of them or give positions in a "
+                + MONTAGE_NAME + " beside the data";
+        if (a == null || b == null) {
+            return new BadInputException(first.source() + ": " + problem, e);
+        }
+        String where = a[0] == b[0] ? "line " + a[0] + " columns " + a[1] + " and " + b[1]
+                : "lines " + a[0] + " and " + b[0] + " column " + a[1];
+        return new BadInputException(first.file() + " " + where + ": " + problem, e);
     }
 
     private static boolean sameSetAxisUnit(Waveforms a, Waveforms b) {

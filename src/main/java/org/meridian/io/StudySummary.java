@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalInt;
 import org.meridian.core.ChannelPlacement;
+import org.meridian.core.InputFile;
 import org.meridian.core.Study;
 
 /**
@@ -41,8 +42,33 @@ public final class StudySummary {
         if (trials != null) {
             out.add("trials: " + trials);
         }
-        out.addAll(warnings(study.placements(), positioned));
+        out.addAll(warnings(study, positioned));
         return out;
+    }
+
+    /**
+     * When a montage file gave positions, the data channels it lacks took template positions
+     * from the standard system: measured and template positions mixed, which a careful user
+     * wants to know about (null when there is nothing to say).
+     */
+    private static String templatePositionsBesideAMontageFile(Study study) {
+        boolean montageFile = study.inputFiles().stream()
+                .anyMatch(f -> f.role() == InputFile.Role.MONTAGE);
+        if (!montageFile) {
+            return null;
+        }
+        List<String> templated = new ArrayList<>();
+        for (ChannelPlacement p : study.placements()) {
+            if (p.how() == ChannelPlacement.How.STANDARD || p.how() == ChannelPlacement.How.ALIAS) {
+                templated.add(p.label());
+            }
+        }
+        if (templated.isEmpty()) {
+            return null;
+        }
+        return "warning: " + templated.size() + " channel" + (templated.size() == 1 ? " is" : "s are")
+                + " not in the montage file and took standard 10-5 (template) positions, mixed with"
+                + " the measured ones: " + String.join(", ", templated);
     }
 
     private static List<String> matches(List<ChannelPlacement> placements) {
@@ -93,9 +119,13 @@ public final class StudySummary {
         return known == cells ? range : range + " (known for " + known + " of " + cells + " cells)";
     }
 
-    private static List<String> warnings(List<ChannelPlacement> placements, int positioned) {
+    private static List<String> warnings(Study study, int positioned) {
         List<String> out = new ArrayList<>();
-        for (ChannelPlacement p : placements) {
+        String templated = templatePositionsBesideAMontageFile(study);
+        if (templated != null) {
+            out.add(templated);
+        }
+        for (ChannelPlacement p : study.placements()) {
             if (!p.positioned()) {
                 String guess = p.detail().isEmpty() ? ""
                         : "; is it a misspelling of " + p.detail() + "?";

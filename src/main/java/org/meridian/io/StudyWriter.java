@@ -12,10 +12,12 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
 import java.util.zip.GZIPOutputStream;
 import org.meridian.core.BadInputException;
 import org.meridian.core.ChannelPlacement;
+import org.meridian.core.InputFile;
 import org.meridian.core.Study;
 import org.meridian.core.TimeAxis;
 import org.meridian.core.Waveforms;
@@ -58,32 +60,40 @@ public final class StudyWriter {
     }
 
     /**
-     * Refuses an output folder that would replace or swallow the input study: the folder the
-     * STUDY argument names (or lies in), or any folder that contains it. Commands that read one
-     * study and write another call this before loading, so even {@code --force} never deletes
-     * an input.
+     * Whether a study derived from {@code input} should be written compressed: when every file
+     * that held its waveforms was gzip-compressed (false for a study not read from files).
      */
-    public static void requireApartFromInput(Path studyArgument, Path outputFolder) {
-        Path input = studyArgument.toAbsolutePath().normalize();
-        Path inputFolder = java.nio.file.Files.isDirectory(input) ? input : input.getParent();
-        Path out = outputFolder.toAbsolutePath().normalize();
-        try {
-            if (java.nio.file.Files.exists(out)) {
-                out = out.toRealPath();
+    public static boolean compressedLikeInput(Study input) {
+        boolean any = false;
+        for (InputFile f : input.inputFiles()) {
+            if (f.role().holdsWaveforms()) {
+                if (!f.gzip()) {
+                    return false;
+                }
+                any = true;
             }
-            if (inputFolder != null && java.nio.file.Files.exists(inputFolder)) {
-                inputFolder = inputFolder.toRealPath();
-            }
-        } catch (java.io.IOException e) {
-            throw new BadInputException("cannot resolve " + outputFolder + ": " + e.getMessage(), e);
         }
-        if (inputFolder != null && inputFolder.startsWith(out)) {
-            throw new BadInputException("option -o: " + outputFolder + " holds the input study "
-                    + studyArgument + "; write the result to another folder");
-        }
+        return any;
     }
 
     public static void write(Study study, Path folder, Options options) {
+        write(study, folder, options, Map.of());
+    }
+
+    /**
+     * Writes the study and, into the same temporary folder before it is renamed into place,
+     * further text files (name → UTF-8 content), e.g. a simulation's ground truth: the folder
+     * appears complete or not at all. Names are plain file names that no study file uses.
+     */
+    public static void write(Study study, Path folder, Options options, Map<String, String> extraFiles) {
+        for (String name : extraFiles.keySet()) {
+            if (name.isEmpty() || name.contains("/") || name.contains("\\") || name.startsWith(".")
+                    || name.equalsIgnoreCase(StudyLoader.MANIFEST_NAME)
+                    || name.equalsIgnoreCase(StudyLoader.MONTAGE_NAME)
+                    || fileNames(study, options.gzip()).stream().anyMatch(name::equalsIgnoreCase)) {
+                throw new IllegalArgumentException("not a free file name in a study folder: " + name);
+            }
+        }
         if (options.decimals() < 0 || options.decimals() > FixedDecimals.MAX_DECIMALS) {
             throw new BadInputException("decimals must be between 0 and "
                     + FixedDecimals.MAX_DECIMALS + ", got " + options.decimals());
@@ -98,6 +108,9 @@ public final class StudyWriter {
         try {
             tmp = Files.createTempDirectory(parent, "." + target.getFileName() + ".writing-");
             writeInto(study, tmp, options);
+            for (Map.Entry<String, String> extra : extraFiles.entrySet()) {
+                Files.writeString(tmp.resolve(extra.getKey()), extra.getValue(), StandardCharsets.UTF_8);
+            }
             FolderMoves.moveIntoPlace(tmp, target, replace);
             tmp = null;
         } catch (IOException e) {

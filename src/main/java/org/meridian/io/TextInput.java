@@ -59,6 +59,15 @@ final class TextInput {
         }
     }
 
+    /** Whether a file starts with the gzip magic bytes (false when it cannot be read). */
+    static boolean isGzip(Path path) {
+        try (InputStream in = Files.newInputStream(path, StandardOpenOption.READ)) {
+            return in.read() == GZIP_MAGIC_1 && in.read() == GZIP_MAGIC_2;
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
     /** A read failure in the middle of a file (a truncated gzip stream, a vanished disk). */
     static BadInputException failure(String file, int line, IOException e) {
         String what = e instanceof java.util.zip.ZipException || e instanceof java.io.EOFException

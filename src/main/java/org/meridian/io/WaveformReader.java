@@ -180,6 +180,36 @@ public final class WaveformReader {
         return Waveforms.wrap(labels, axis, pre.unit().unit(), values);
     }
 
+    /**
+     * Where a channel label stands in a waveform file, for messages about it: {line, column}
+     * of its header cell (samples as rows) or of its row's first cell (channels as rows); null
+     * when the file is not a waveform file or lacks the label. Reads the file again, so it is
+     * meant for the error path only.
+     */
+    static int[] labelPlace(Path file, String label) {
+        String key = Montage.key(label);
+        try (LineScanner sc = new LineScanner(file.toString(), TextInput.open(file), () -> false)) {
+            Preamble pre = Preamble.read(sc);
+            String first = pre.firstColumnKey();
+            if (first.equals("time_ms") || first.equals("time_s")) {
+                for (int i = 1; i < pre.columns().size(); i++) {
+                    if (Montage.key(pre.columns().get(i)).equals(key)) {
+                        return new int[] {pre.headerLine(), i + 1};
+                    }
+                }
+            } else if (first.equals("channel")) {
+                while (sc.next()) {
+                    if (Montage.key(sc.text(0)).equals(key)) {
+                        return new int[] {sc.line(), 1};
+                    }
+                }
+            }
+            return null;
+        } catch (RuntimeException e) {
+            return null;
+        }
+    }
+
     /** Channel labels from header cells: none empty, none twice (ignoring case). */
     static List<String> labels(LineScanner sc, List<String> cells, int firstColumn) {
         Map<String, Integer> seen = new HashMap<>();
@@ -202,6 +232,9 @@ public final class WaveformReader {
 
     /** A row whose cell count differs from the header's; the column is the first cell at odds. */
     static ReadException ragged(LineScanner sc, int width) {
+        if (sc.isComment()) {
+            return sc.commentAfterHeader();
+        }
         int have = sc.cellCount();
         if (have < width) {
             return sc.error(have + 1, "the row has " + have + " cells but the header has " + width

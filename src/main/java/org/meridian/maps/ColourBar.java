@@ -52,8 +52,11 @@ public final class ColourBar {
 
             int steps = 256;
             BufferedImage ramp = new BufferedImage(1, steps, BufferedImage.TYPE_INT_RGB);
+            // the part of the scale the limits use (all of it when they are symmetric)
+            double from = limits.position(limits.lower());
+            double to = limits.position(limits.upper());
             for (int i = 0; i < steps; i++) {
-                ramp.setRGB(0, steps - 1 - i, scale.rgb(i / (steps - 1.0)));
+                ramp.setRGB(0, steps - 1 - i, scale.rgb(from + (to - from) * i / (steps - 1.0)));
             }
             AffineTransform place = AffineTransform.getTranslateInstance(bar.getX(), bar.getY());
             place.scale(bar.getWidth(), bar.getHeight() / steps);
@@ -62,7 +65,7 @@ public final class ColourBar {
             g.setStroke(new BasicStroke(lineWidth));
             g.draw(bar);
             for (double tick : limits.ticks()) {
-                double y = bar.getMaxY() - limits.position(tick) * bar.getHeight();
+                double y = bar.getMaxY() - limits.barFraction(tick) * bar.getHeight();
                 g.draw(new Line2D.Double(bar.getMaxX(), y, bar.getMaxX() + fontSize * 0.35, y));
                 g.drawString(limits.format(tick), (float) (bar.getMaxX() + fontSize * 0.55),
                         (float) (y + fm.getAscent() * 0.35));

@@ -6,9 +6,15 @@ import java.util.Locale;
 import org.meridian.core.BadInputException;
 
 /**
- * The values at the two ends of a colour scale. Values beyond them take the end colours. Maps of
- * the trade are symmetric about zero, so that zero always has the scale's middle colour; the
- * automatic limits are ±(largest absolute value, rounded up to a round number).
+ * The values at the two ends of a colour bar. Values beyond them take the end colours. Maps of
+ * the trade are symmetric about zero by default; the automatic limits are ±(largest absolute
+ * value, rounded up to a round number). Fixed limits may also be asymmetric (−2 to 8 µV).
+ *
+ * <p>Zero always takes the colour scale's middle (neutral) colour, which a diverging scale keeps
+ * for the critical value (Moreland, 2009): with M = max(|lower|, |upper|) a value v has the
+ * colour at position (v + M) / (2M) of the scale, v clamped to [lower, upper]. Symmetric limits
+ * use the whole scale; asymmetric ones the part of it between their ends, so −2 to 8 µV colours
+ * −2 µV as −2 µV would be coloured under ±8 µV.
  */
 public record ColourLimits(double lower, double upper) {
     /** The automatic limits aim at about this many tick intervals from zero to the upper limit. */
@@ -47,24 +53,61 @@ public record ColourLimits(double lower, double upper) {
         return automatic(m);
     }
 
-    /** Reads {@code auto} (returns null: compute from the data) or {@code X} / {@code ±X} for ±X. */
+    /**
+     * Reads {@code auto} (returns null: compute from the data), {@code X} or {@code ±X} (also
+     * {@code +-X}) for ±X, or {@code LOWER:UPPER} (e.g. {@code -2:8}) for fixed limits.
+     */
     public static ColourLimits parse(String text) {
         String t = text.trim().toLowerCase(Locale.ROOT);
         if (t.equals("auto")) {
             return null;
         }
+        int colon = t.indexOf(':');
+        if (colon >= 0) {
+            double lower = limit(t.substring(0, colon), text);
+            double upper = limit(t.substring(colon + 1), text);
+            if (!(lower < upper)) {
+                throw new BadInputException("colour limits \"" + text.trim()
+                        + "\" must run from a lower to a higher value (LOWER:UPPER, e.g. -2:8)");
+            }
+            return new ColourLimits(lower, upper);
+        }
         if (t.startsWith("±") || t.startsWith("+-")) {
             t = t.substring(t.startsWith("±") ? 1 : 2);
         }
-        try {
-            return symmetric(Double.parseDouble(t));
-        } catch (NumberFormatException e) {
-            throw new BadInputException("colour scale limit \"" + text + "\" is not auto or ±X (e.g. ±5)");
-        }
+        return symmetric(limit(t, text));
     }
 
-    /** Where a value falls along the scale: 0 at the lower limit, 1 at the upper, clamped. */
+    private static double limit(String number, String text) {
+        String n = number.trim().replace('\u2212', '-');
+        if (!n.matches("[+-]?([0-9]+\\.?[0-9]*|\\.[0-9]+)([eE][+-]?[0-9]+)?")) {
+            throw new BadInputException("colour limits \"" + text.trim()
+                    + "\" are not auto, ±X (e.g. ±5) or LOWER:UPPER (e.g. -2:8)");
+        }
+        double v = Double.parseDouble(n);
+        if (!Double.isFinite(v)) {
+            throw new BadInputException("colour limit " + n + " is too large");
+        }
+        return v;
+    }
+
+    /** The largest absolute limit: the value at either end of the full colour scale. */
+    public double halfRange() {
+        return Math.max(Math.abs(lower), Math.abs(upper));
+    }
+
+    /**
+     * Where a value falls along the colour scale: (v + M) / (2M) with M = {@link #halfRange} and
+     * v clamped to the limits, so zero is always at 0.5.
+     */
     public double position(double value) {
+        double v = value < lower ? lower : (value > upper ? upper : value);
+        double m = halfRange();
+        return (v + m) / (2 * m);
+    }
+
+    /** Where a value falls along the colour bar: 0 at the lower limit, 1 at the upper, clamped. */
+    public double barFraction(double value) {
         double t = (value - lower) / (upper - lower);
         return t < 0 ? 0 : (t > 1 ? 1 : t);
     }

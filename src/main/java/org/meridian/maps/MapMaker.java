@@ -61,6 +61,24 @@ public final class MapMaker {
                 new MapLayout(montage, extent), resolution);
     }
 
+    /**
+     * The most memory the weights of a map maker take: every pixel of the resolution² grid
+     * ({@link SplineWeights#bytesFor}); the pixels outside the region, not computed, make the
+     * true figure about a quarter smaller.
+     */
+    public static long weightBytes(int resolution, int channels) {
+        return SplineWeights.bytesFor((long) resolution * resolution, channels);
+    }
+
+    /** The largest resolution whose weights ({@link #weightBytes}) fit in a number of bytes. */
+    public static int largestResolution(int channels, long bytes) {
+        int r = (int) Math.min(Integer.MAX_VALUE, (long) Math.sqrt((double) bytes / weightBytes(1, channels)));
+        while (r > 0 && weightBytes(r, channels) > bytes) {
+            r--;
+        }
+        return r;
+    }
+
     public SphericalSpline spline() {
         return spline;
     }

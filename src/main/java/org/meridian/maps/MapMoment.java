@@ -18,6 +18,9 @@ public sealed interface MapMoment permits MapMoment.At, MapMoment.Window {
     /** One value per spline channel: {@code rows[i]} is channel i's row in the waveforms. */
     double[] valuesOf(Waveforms waveforms, int[] rows);
 
+    /** Checks that data on this time axis can be mapped at this moment (a bad-input error if not). */
+    void requireWithin(TimeAxis axis);
+
     static MapMoment at(double timeMs) {
         return new At(timeMs);
     }
@@ -40,12 +43,17 @@ public sealed interface MapMoment permits MapMoment.At, MapMoment.Window {
         }
 
         @Override
-        public double[] valuesOf(Waveforms waveforms, int[] rows) {
-            TimeAxis axis = waveforms.axis();
+        public void requireWithin(TimeAxis axis) {
             if (!axis.covers(timeMs)) {
                 throw new BadInputException("time " + ms(timeMs) + " ms is outside the data ("
                         + span(axis) + ")");
             }
+        }
+
+        @Override
+        public double[] valuesOf(Waveforms waveforms, int[] rows) {
+            TimeAxis axis = waveforms.axis();
+            requireWithin(axis);
             int s = axis.nearestIndex(timeMs);
             double[] out = new double[rows.length];
             for (int i = 0; i < rows.length; i++) {
@@ -82,18 +90,23 @@ public sealed interface MapMoment permits MapMoment.At, MapMoment.Window {
         }
 
         @Override
-        public double[] valuesOf(Waveforms waveforms, int[] rows) {
-            TimeAxis axis = waveforms.axis();
+        public void requireWithin(TimeAxis axis) {
             if (!axis.covers(startMs) || !axis.covers(endMs)) {
                 throw new BadInputException("window " + ms(startMs) + ":" + ms(endMs)
                         + " ms reaches beyond the data (" + span(axis) + ")");
             }
-            int a = Math.max(0, firstSample(axis));
-            int b = Math.min(axis.samples() - 1, lastSample(axis));
-            if (b < a) {
+            if (Math.min(axis.samples() - 1, lastSample(axis)) < Math.max(0, firstSample(axis))) {
                 throw new BadInputException("window " + ms(startMs) + ":" + ms(endMs)
                         + " ms holds no sample (one sample every " + ms(axis.stepMs()) + " ms)");
             }
+        }
+
+        @Override
+        public double[] valuesOf(Waveforms waveforms, int[] rows) {
+            TimeAxis axis = waveforms.axis();
+            requireWithin(axis);
+            int a = Math.max(0, firstSample(axis));
+            int b = Math.min(axis.samples() - 1, lastSample(axis));
             double[] out = new double[rows.length];
             for (int i = 0; i < rows.length; i++) {
                 double sum = 0;

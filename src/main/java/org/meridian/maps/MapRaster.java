@@ -179,9 +179,11 @@ public final class MapRaster {
         }
         float[] grid = coarseValues(channelValues);
         Arrays.fill(argb, 0, size * size, 0);
-        float lower = (float) limits.lower();
-        float scale = (float) ((colourTable.length - 1) / (limits.upper() - limits.lower()));
-        int last = colourTable.length - 1;
+        // colour index of v: ColourLimits.position(v) · (entries − 1), clamped to the limits'
+        float half = (float) limits.halfRange();
+        float scale = (float) ((colourTable.length - 1) / (2 * limits.halfRange()));
+        int first = (int) Math.round(limits.position(limits.lower()) * (colourTable.length - 1));
+        int last = (int) Math.round(limits.position(limits.upper()) * (colourTable.length - 1));
         for (int row = 0; row < size; row++) {
             int[] r = runs[row];
             int top = rowCell[row] * span;
@@ -190,8 +192,8 @@ public final class MapRaster {
             for (int k = 0; k < r.length; k += 2) {
                 for (int col = r[k]; col < r[k + 1]; col++) {
                     float v = interpolate(grid, top + columnCell[col], columnFraction[col], w);
-                    int i = (int) ((v - lower) * scale + 0.5f);
-                    argb[offset + col] = colourTable[i < 0 ? 0 : (i > last ? last : i)];
+                    int i = (int) ((v + half) * scale + 0.5f);
+                    argb[offset + col] = colourTable[i < first ? first : (i > last ? last : i)];
                 }
             }
         }

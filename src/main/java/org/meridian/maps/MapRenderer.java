@@ -3,10 +3,11 @@ package org.meridian.maps;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
-import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.Shape;
+import java.awt.font.FontRenderContext;
+import java.awt.font.LineMetrics;
 import java.awt.geom.AffineTransform;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Point2D;
@@ -176,12 +177,9 @@ public final class MapRenderer {
 
     private static void drawElectrodes(Graphics2D g, MapLayout layout, MapStyle style,
             AffineTransform toDevice, double side) {
-        double dense = Math.min(1, Math.sqrt(64.0 / Math.max(64, layout.electrodeCount())));
-        double r = Math.max(0.6, side * 0.0085 * style.sizeFactor() * dense);
-        Font font = new Font(Font.SANS_SERIF, Font.PLAIN, 1).deriveFont((float) Math.max(5,
-                side * 0.032 * style.sizeFactor() * Math.max(0.6, dense)));
-        g.setFont(font);
-        FontMetrics fm = g.getFontMetrics();
+        double r = markerRadius(layout, style, side);
+        g.setFont(labelFont(layout, style, side));
+        FontRenderContext frc = g.getFontRenderContext();
         for (int i = 0; i < layout.electrodeCount(); i++) {
             double[] p = layout.position(i);
             Point2D d = toDevice.transform(new Point2D.Double(p[0], p[1]), null);
@@ -201,10 +199,62 @@ public final class MapRenderer {
             }
             if (style.labels() || highlighted) {
                 g.setColor(OUTLINE);
-                float x = (float) (d.getX() - fm.stringWidth(label) / 2.0);
-                float y = (float) (d.getY() + 2.4 * r + fm.getAscent() * 0.8);
-                g.drawString(label, x, y);
+                Rectangle2D box = labelBox(d, label, g.getFont(), frc, r);
+                g.drawString(label, (float) box.getX(), (float) (box.getY() + g.getFont().getLineMetrics(label,
+                        frc).getAscent()));
             }
         }
+    }
+
+    /**
+     * The device rectangle every electrode label drawn on a map in these bounds takes (labels of
+     * all electrodes when the style shows labels, else of the highlighted ones), or null when no
+     * label is drawn. Lets a layout keep room for labels that reach beyond the map's square (Iz
+     * below the head, T9 and T10 at its sides).
+     */
+    public static Rectangle2D labelBounds(Rectangle2D bounds, MapLayout layout, MapStyle style, FontRenderContext frc) {
+        double side = Math.min(bounds.getWidth(), bounds.getHeight());
+        AffineTransform toDevice = planeToDevice(bounds, layout);
+        double r = markerRadius(layout, style, side);
+        Font font = labelFont(layout, style, side);
+        Rectangle2D all = null;
+        for (int i = 0; i < layout.electrodeCount(); i++) {
+            String label = layout.labels().get(i);
+            if (!style.labels() && !style.isHighlighted(label)) {
+                continue;
+            }
+            double[] p = layout.position(i);
+            Rectangle2D box = labelBox(toDevice.transform(new Point2D.Double(p[0], p[1]), null), label, font, frc, r);
+            if (all == null) {
+                all = box;
+            } else {
+                all.add(box);
+            }
+        }
+        return all;
+    }
+
+    /** Marker radius: smaller on dense montages, never below 0.6 device units. */
+    private static double markerRadius(MapLayout layout, MapStyle style, double side) {
+        return Math.max(0.6, side * 0.0085 * style.sizeFactor() * density(layout));
+    }
+
+    private static Font labelFont(MapLayout layout, MapStyle style, double side) {
+        return new Font(Font.SANS_SERIF, Font.PLAIN, 1).deriveFont((float) Math.max(5,
+                side * 0.032 * style.sizeFactor() * Math.max(0.6, density(layout))));
+    }
+
+    /** 1 up to 64 electrodes, then shrinking as 1/√n, so markers and labels of dense caps do not crowd. */
+    private static double density(MapLayout layout) {
+        return Math.min(1, Math.sqrt(64.0 / Math.max(64, layout.electrodeCount())));
+    }
+
+    /** A label's box: centred under its marker, its top 2.4 marker radii below the marker's centre. */
+    private static Rectangle2D labelBox(Point2D marker, String label, Font font, FontRenderContext frc, double r) {
+        LineMetrics lm = font.getLineMetrics(label, frc);
+        double width = font.getStringBounds(label, frc).getWidth();
+        double baseline = marker.getY() + 2.4 * r + lm.getAscent() * 0.8;
+        return new Rectangle2D.Double(marker.getX() - width / 2, baseline - lm.getAscent(), width,
+                lm.getAscent() + lm.getDescent());
     }
 }

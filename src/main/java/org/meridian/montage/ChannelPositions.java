@@ -10,7 +10,8 @@ import org.meridian.core.Montage;
 
 /**
  * Finds the position of every channel label of a study: first in the montage file (when one is
- * given), then among the standard 10-5 positions, directly or through an alias (T3 → T7). A label
+ * given), under the label or another name of the same position (data T3, file T7), then among the
+ * standard 10-5 positions, directly or through an alias (T3 → T7). A label
  * found in neither loads as an unpositioned channel, with the standard label it most likely meant
  * when one is close.
  */
@@ -30,7 +31,7 @@ public final class ChannelPositions {
         List<Electrode> positioned = new ArrayList<>();
         List<ChannelPlacement> placements = new ArrayList<>();
         for (String label : labels) {
-            Optional<Electrode> inFile = fromFile == null ? Optional.empty() : fromFile.find(label);
+            Optional<Electrode> inFile = inFile(label, fromFile);
             if (inFile.isPresent()) {
                 positioned.add(inFile.get().withLabel(label));
                 placements.add(new ChannelPlacement(label, How.MONTAGE_FILE, ""));
@@ -60,6 +61,23 @@ public final class ChannelPositions {
             source = fromFile.source() + " and standard 10-5 positions";
         }
         return new Resolution(new Montage(positioned, source), placements);
+    }
+
+    /**
+     * The montage file's electrode for a data label, under any of its names: a file that says T7
+     * measures the data's T3, and the reverse ({@link Labels#spellings}).
+     */
+    private static Optional<Electrode> inFile(String label, Montage fromFile) {
+        if (fromFile == null) {
+            return Optional.empty();
+        }
+        for (String name : Labels.spellings(label)) {
+            Optional<Electrode> e = fromFile.find(name);
+            if (e.isPresent()) {
+                return e;
+            }
+        }
+        return Optional.empty();
     }
 
     private static int countFromFile(List<ChannelPlacement> placements) {

@@ -74,6 +74,16 @@ public enum StandardSystem {
         return ALL_10_5.get(label.trim().toLowerCase(Locale.ROOT));
     }
 
+    /**
+     * The point the geometry computed for a 10-5 label (lower case), before it became an
+     * {@link Electrode} (whose constructor normalises): lets tests check that the construction
+     * itself lands on the unit sphere. Null when the label is not there.
+     */
+    static double[] rawPoint(String label) {
+        double[] p = RAW.get(label.trim().toLowerCase(Locale.ROOT));
+        return p == null ? null : p.clone();
+    }
+
     /** All 10-5 labels in their canonical spelling. */
     static List<String> labels10_5() {
         List<String> out = new ArrayList<>();
@@ -91,6 +101,8 @@ public enum StandardSystem {
 
     /** Keyed by lower-case label, in output order. */
     private static final Map<String, Electrode> ALL_10_5 = new LinkedHashMap<>();
+    /** The computed points behind {@link #ALL_10_5}, keyed alike. */
+    private static final Map<String, double[]> RAW = new LinkedHashMap<>();
 
     /** Row prefixes of the 10-5 grid from Fp (row 0) to O (row 16). */
     private static final String[] ROWS = {"Fp", "AFp", "AF", "AFF", "F", "FFC", "FC", "FCC", "C",
@@ -218,6 +230,7 @@ public enum StandardSystem {
     }
 
     private static void put(String label, double[] p) {
+        RAW.put(label.toLowerCase(Locale.ROOT), p.clone());
         ALL_10_5.put(label.toLowerCase(Locale.ROOT), new Electrode(label, p[0], p[1], p[2]));
     }
 

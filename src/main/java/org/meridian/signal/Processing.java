@@ -198,7 +198,7 @@ public final class Processing {
             montage = new Montage(electrodes, montage.source());
             placements.addAll(r.placements());
         }
-        b.montage(montage).placements(placements);
+        b.montage(montage).placements(placements).inputFiles(study.inputFiles());
         for (int p = 0; p < study.participants().size(); p++) {
             for (int c = 0; c < study.conditions().size(); c++) {
                 b.add(study.participants().get(p), study.conditions().get(c),

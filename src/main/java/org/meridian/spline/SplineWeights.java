@@ -35,6 +35,14 @@ public final class SplineWeights {
         this.operator = operator;
     }
 
+    /**
+     * The memory the single-precision weights of {@code points} points take for a montage of
+     * {@code channels} channels: points × (N + 20) floats (the operator B is small beside it).
+     */
+    public static long bytesFor(long points, int channels) {
+        return points * (channels + LowDegree.COUNT) * Float.BYTES;
+    }
+
     public Quantity quantity() {
         return quantity;
     }

@@ -40,8 +40,9 @@ class MapsCommandTest {
         int side = (int) (image.getWidth() / 2.56);
         int left = image.getRGB(mapLeft + side / 4, y);
         int right = image.getRGB(mapLeft + 3 * side / 4, y);
-        // DESIGN §3 (nose up, left on the left) with the centred dipole V ∝ r·d (DESIGN §8):
-        // warm (red > blue) on the left, cool on the right
+        // centred dipole in a sphere: V = 3 p cosθ / (4πσR²) (bioelectric field textbook), so the
+        // potential is positive on the side the dipole points to; common practice draws maps
+        // nose up with left on the left: warm (red > blue) on the left, cool on the right
         assertThat((left >> 16) & 0xff).isGreaterThan((left & 0xff) + 40);
         assertThat(right & 0xff).isGreaterThan(((right >> 16) & 0xff) + 40);
     }
@@ -84,17 +85,67 @@ class MapsCommandTest {
         assertThat(noCondition.exitCode()).isEqualTo(2);
         assertThat(noCondition.err().strip()).startsWith("error: option --condition: ")
                 .contains("no condition \"odd\"");
-        CliRun late = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "900", "-o", out);
-        assertThat(late.err().strip()).isEqualTo("error: time 900 ms is outside the data (-100 to 56 ms)");
         CliRun both = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "0", "--windows", "0:10", "-o", out);
         assertThat(both.exitCode()).isEqualTo(2);
         assertThat(both.err()).startsWith("error: ");
-        CliRun window = CliRun.of("maps", study.toString(), "--condition", "rare", "--windows", "10", "-o", out);
-        assertThat(window.err().strip()).isEqualTo("error: option --windows: \"10\" is not START:END in ms");
         CliRun gif = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "0", "-o", dir.resolve("x.gif").toString());
         assertThat(gif.err().strip()).endsWith("x.gif: the figure must be a .svg, .pdf, .png or .tiff file");
-        CliRun scale = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "0", "--scale", "wide", "-o", out);
-        assertThat(scale.err().strip()).isEqualTo("error: colour scale limit \"wide\" is not auto or ±X (e.g. ±5)");
         assertThat(Files.exists(dir.resolve("x.png"))).isFalse();
+    }
+
+    /** The one stderr line of a maps run on the fixture at 0 ms with extra options. */
+    private String errorWith(String... options) {
+        java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of("maps", study.toString(),
+                "--condition", "rare"));
+        if (java.util.Arrays.stream(options).noneMatch(o -> o.equals("--times") || o.equals("--windows"))) {
+            args.addAll(java.util.List.of("--times", "0"));
+        }
+        args.addAll(java.util.List.of(options));
+        args.addAll(java.util.List.of("-o", dir.resolve("x.png").toString()));
+        CliRun r = CliRun.of(args.toArray(String[]::new));
+        assertThat(r.exitCode()).as(String.join(" ", options)).isEqualTo(2);
+        assertThat(r.err().lines().count()).as(r.err()).isEqualTo(1);
+        assertThat(Files.exists(dir.resolve("x.png"))).isFalse();
+        return r.err().strip();
+    }
+
+    @Test
+    void everyBadOptionIsNamedInItsError() {
+        // DESIGN §9: one line "error: …" naming the option at fault
+        assertThat(errorWith("--times", "900"))
+                .isEqualTo("error: option --times: time 900 ms is outside the data (-100 to 56 ms)");
+        assertThat(errorWith("--times", "abc")).isEqualTo("error: option --times: \"abc\" is not a number of ms");
+        assertThat(errorWith("--windows", "10")).isEqualTo("error: option --windows: \"10\" is not START:END in ms");
+        assertThat(errorWith("--windows", "30:30")).startsWith("error: option --windows: a map window must run");
+        assertThat(errorWith("--windows", "0:900")).startsWith("error: option --windows: window 0:900 ms reaches beyond");
+        assertThat(errorWith("--scale", "wide")).isEqualTo(
+                "error: option --scale: colour limits \"wide\" are not auto, ±X (e.g. ±5) or LOWER:UPPER (e.g. -2:8)");
+        assertThat(errorWith("--scale=-5")).startsWith("error: option --scale: a symmetric colour scale needs a positive limit");
+        assertThat(errorWith("--scale", "8:-2")).startsWith("error: option --scale: colour limits \"8:-2\" must run from");
+        assertThat(errorWith("--scale", "1:NaN")).startsWith("error: option --scale: colour limits \"1:NaN\" are not");
+        assertThat(errorWith("--colour-scale", "rainbow")).startsWith("error: option --colour-scale: no colour scale \"rainbow\"");
+        assertThat(errorWith("--extent", "foo")).startsWith("error: option --extent: map extent \"foo\" is not");
+        assertThat(errorWith("--extent", "electrodes:7")).startsWith("error: option --extent: the map margin must be");
+        assertThat(errorWith("--width-mm", "0")).startsWith("error: option --width-mm: ").contains("20 to 500 mm");
+        assertThat(errorWith("--resolution", "8")).isEqualTo("error: option --resolution: must be from 16 to 2048, got 8");
+    }
+
+    @Test
+    void highlightedLabelsMustBeOnTheMaps() {
+        assertThat(errorWith("--highlight", "Cz,Fp1x")).isEqualTo(
+                "error: option --highlight: no channel \"Fp1x\" on the maps; did you mean Fp1?");
+        assertThat(errorWith("--highlight", "Xyzzy")).isEqualTo("error: option --highlight: no channel \"Xyzzy\" on the maps");
+        // a mastoid reference is no misspelt scalp site (common practice)
+        assertThat(errorWith("--highlight", "M1")).isEqualTo("error: option --highlight: no channel \"M1\" on the maps");
+        assertThat(errorWith("--highlight", "VEOG")).isEqualTo(
+                "error: option --highlight: channel \"VEOG\" has no position, so it is not on the maps");
+    }
+
+    @Test
+    void fixedAsymmetricLimitsAreKept() {
+        CliRun r = CliRun.of("maps", study.toString(), "--condition", "rare", "--times", "0,50", "--scale", "-2:8",
+                "--dpi", "100", "-o", dir.resolve("a.png").toString());
+        assertThat(r.err()).isEmpty();
+        assertThat(r.out()).contains("limits: \u22122 to 8");
     }
 }

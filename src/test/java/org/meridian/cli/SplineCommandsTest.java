@@ -93,7 +93,7 @@ class SplineCommandsTest {
         for (Path target : List.of(in, dir)) {
             CliRun r = CliRun.of("csd", in.toString(), "-o", target.toString(), "--force");
             assertThat(r.exitCode()).isEqualTo(2);
-            assertThat(r.err()).startsWith("error: option -o: ").contains("holds the input study");
+            assertThat(r.err()).startsWith("error: option -o: ").contains("holds an input file of the study");
             CliRun repair = CliRun.of("repair", in.resolve("study.tsv").toString(), "--channels", "C3",
                     "-o", target.toString(), "--force");
             assertThat(repair.exitCode()).isEqualTo(2);

@@ -39,6 +39,184 @@ class BrokenInputPropertyTest {
 
     enum StudyBreak { MISSING_FILE, DIFFERENT_CHANNELS, DIFFERENT_AXIS, SAME_POSITION }
 
+    enum LongTableBreak { NAN, NON_NUMERIC, RAGGED_SHORT, REPEATED_VALUE, MISSING_VALUE, DIFFERENT_CHANNELS,
+        COMMENT_AFTER_HEADER }
+
+    enum MontageBreak { DUPLICATE_LABEL, NON_NUMERIC, RAGGED_SHORT, SAME_POSITION, HEADER_ONLY,
+        COMMENT_AFTER_HEADER }
+
+    @Property(tries = 120)
+    void everyBrokenLongTableNamesItsFault(@ForAll("longTables") Variant v, @ForAll LongTableBreak kind,
+            @ForAll("seeds") long seed) throws Exception {
+        Random r = new Random(seed);
+        Study study = RandomStudies.study(r, 3, 3, Unit.MICROVOLT);
+        List<String> lines = new ArrayList<>(VariantWriter.longTableLines(study, v));
+        int h = headerIndex(lines);
+        String d = v.delimiter().text;
+        List<String> columns = List.of(split(lines.get(h), d));
+        int width = columns.size();
+        int row = h + 1 + r.nextInt(lines.size() - h - 1);
+        int value = columns.indexOf("value");
+        int channel = columns.indexOf("channel");
+        String expect;
+        switch (kind) {
+            case NAN -> {
+                lines.set(row, replaceCell(lines.get(row), d, value, "NaN"));
+                expect = at(row, value + 1) + "\"NaN\" is not a finite number";
+            }
+            case NON_NUMERIC -> {
+                lines.set(row, replaceCell(lines.get(row), d, value, "0x1p3"));
+                expect = at(row, value + 1) + "\"0x1p3\" is not a number";
+            }
+            case RAGGED_SHORT -> {
+                String[] cells = split(lines.get(row), d);
+                lines.set(row, String.join(d, Arrays.copyOf(cells, cells.length - 1)));
+                expect = at(row, width) + "the row has " + (width - 1) + " cells but the header has "
+                        + width + " (missing cell)";
+            }
+            case REPEATED_VALUE -> {
+                lines.add(lines.get(row));
+                expect = " line " + lines.size() + ": participant ";
+            }
+            case MISSING_VALUE -> {
+                if (study.channelLabels().size() < 2) {
+                    return; // with one channel a lost row changes the time axis instead
+                }
+                String[] cells = split(lines.remove(row), d);
+                expect = ": no value for participant ";
+                expect += cells[columns.indexOf("participant")] + ", condition "
+                        + cells[columns.indexOf("condition")] + ", channel " + cells[channel];
+            }
+            case DIFFERENT_CHANNELS -> {
+                if (study.participants().size() * study.conditions().size() < 2) {
+                    return; // one cell cannot differ from another
+                }
+                String[] cells = split(lines.get(row), d);
+                String from = cells[channel];
+                String p = cells[columns.indexOf("participant")];
+                String c = cells[columns.indexOf("condition")];
+                for (int i = h + 1; i < lines.size(); i++) {
+                    String[] other = split(lines.get(i), d);
+                    if (other[channel].equals(from) && other[columns.indexOf("participant")].equals(p)
+                            && other[columns.indexOf("condition")].equals(c)) {
+                        lines.set(i, replaceCell(lines.get(i), d, channel, "Renamed"));
+                    }
+                }
+                expect = ": participant ";
+            }
+            case COMMENT_AFTER_HEADER -> {
+                lines.add(row, "# a late note");
+                expect = at(row, 1) + "a comment line after the header";
+            }
+            default -> throw new IllegalStateException();
+        }
+        Path dir = TempDirs.create();
+        try {
+            Path file = dir.resolve("long.tsv" + (v.gzip() ? ".gz" : ""));
+            VariantWriter.writeLines(file, lines, v);
+            Throwable t = catchThrowable(() -> StudyLoader.load(file));
+            assertThat(t).isInstanceOf(BadInputException.class);
+            assertThat(t.getMessage()).doesNotContain("\n").startsWith(file + expect);
+            if (kind == LongTableBreak.REPEATED_VALUE) {
+                assertThat(t.getMessage()).contains(" is given twice (also on line ");
+            }
+            if (kind == LongTableBreak.DIFFERENT_CHANNELS) {
+                assertThat(t.getMessage()).contains("(the cells have different channel sets)");
+            }
+        } finally {
+            TempDirs.delete(dir);
+        }
+    }
+
+    @Property(tries = 120)
+    void everyBrokenMontageFileNamesItsFault(@ForAll MontageBreak kind, @ForAll boolean measured,
+            @ForAll("seeds") long seed) throws Exception {
+        Random r = new Random(seed);
+        List<org.meridian.core.Electrode> all = new ArrayList<>(
+                org.meridian.montage.StandardSystem.TEN_TWENTY.montage().electrodes());
+        java.util.Collections.shuffle(all, r);
+        // Cz keeps the points off any one plane, so the sphere fit always has a sphere to find
+        all.removeIf(e -> e.label().equals("Cz"));
+        List<org.meridian.core.Electrode> chosen = new ArrayList<>(all.subList(0, 5 + r.nextInt(10)));
+        chosen.add(r.nextInt(chosen.size()), org.meridian.montage.StandardSystem.TEN_TWENTY.montage()
+                .find("Cz").orElseThrow());
+        List<String> lines = new ArrayList<>();
+        lines.add(measured ? "label\tx\ty\tz" : "label\ttheta\tphi");
+        for (org.meridian.core.Electrode e : chosen) {
+            lines.add(e.label() + "\t" + coordinates(e, measured));
+        }
+        int width = measured ? 4 : 3;
+        int row = 1 + r.nextInt(chosen.size());
+        String expect;
+        switch (kind) {
+            case DUPLICATE_LABEL -> {
+                int other = 1 + (row % chosen.size());
+                String twin = chosen.get(row - 1).label().toLowerCase(java.util.Locale.ROOT);
+                lines.set(other, replaceCell(lines.get(other), "\t", 0, twin));
+                int first = Math.min(row, other);
+                int second = Math.max(row, other);
+                expect = at(second, 1) + "electrode " + split(lines.get(second), "\t")[0]
+                        + " appears twice (also on line " + (first + 1) + ")";
+            }
+            case NON_NUMERIC -> {
+                int cell = 1 + r.nextInt(width - 1);
+                lines.set(row, replaceCell(lines.get(row), "\t", cell, "n.a."));
+                expect = at(row, cell + 1) + "\"n.a.\" is not a number";
+            }
+            case RAGGED_SHORT -> {
+                String[] cells = split(lines.get(row), "\t");
+                lines.set(row, String.join("\t", Arrays.copyOf(cells, cells.length - 1)));
+                expect = at(row, width) + "the row has " + (width - 1) + " cells but the header has "
+                        + width + " (missing cell)";
+            }
+            case SAME_POSITION -> {
+                // a hair's breadth away: not the same numbers, but the same direction
+                org.meridian.core.Electrode e = chosen.get(row - 1);
+                org.meridian.core.Electrode near = new org.meridian.core.Electrode("Twin", e.x() + 1e-7,
+                        e.y(), e.z());
+                lines.add("Twin\t" + coordinates(near, measured));
+                expect = " line " + lines.size() + ": electrode Twin is at the same position as "
+                        + e.label() + " (line " + (row + 1) + ")";
+            }
+            case HEADER_ONLY -> {
+                lines.subList(1, lines.size()).clear();
+                expect = " line 1: a header but no electrodes";
+            }
+            case COMMENT_AFTER_HEADER -> {
+                lines.add(row, "# measured again on Tuesday");
+                expect = at(row, 1) + "a comment line after the header";
+            }
+            default -> throw new IllegalStateException();
+        }
+        Path dir = TempDirs.create();
+        try {
+            Path montage = dir.resolve("montage.tsv");
+            Files.writeString(montage, String.join("\n", lines) + "\n");
+            StringBuilder data = new StringBuilder("time_ms");
+            for (org.meridian.core.Electrode e : chosen) {
+                data.append('\t').append(e.label());
+            }
+            data.append("\n0").append("\t1".repeat(chosen.size())).append("\n4")
+                    .append("\t2".repeat(chosen.size())).append('\n');
+            Path file = Files.writeString(dir.resolve("p01.tsv"), data);
+            Throwable t = catchThrowable(() -> StudyLoader.load(file));
+            assertThat(t).isInstanceOf(BadInputException.class);
+            assertThat(t.getMessage()).doesNotContain("\n").startsWith(montage + expect);
+        } finally {
+            TempDirs.delete(dir);
+        }
+    }
+
+    /** theta and phi in degrees, or x y z in mm on a 95 mm head whose centre is off the origin. */
+    private static String coordinates(org.meridian.core.Electrode e, boolean measured) {
+        if (measured) {
+            return (95 * e.x() + 3) + "\t" + (95 * e.y() - 12) + "\t" + (95 * e.z() + 40);
+        }
+        double theta = Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, e.z()))));
+        double phi = Math.toDegrees(Math.atan2(e.y(), e.x()));
+        return theta + "\t" + phi;
+    }
+
     @Property(tries = 200)
     void everyBrokenWaveformFileNamesItsFault(@ForAll("singleFiles") Variant v,
             @ForAll FileBreak kind, @ForAll("seeds") long seed) throws Exception {
@@ -273,6 +451,13 @@ class BrokenInputPropertyTest {
     @Provide
     Arbitrary<Variant> singleFiles() {
         return variants(Layout.SINGLE_FILE);
+    }
+
+    @Provide
+    Arbitrary<Variant> longTables() {
+        return Combinators.combine(variants(Layout.LONG_TABLE), Arbitraries.longs())
+                .as((v, s) -> new Variant(v.orientation(), v.delimiter(), v.crlf(), v.gzip(), v.unit(),
+                        v.layout(), v.comments(), s));
     }
 
     @Provide

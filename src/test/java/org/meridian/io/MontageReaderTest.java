@@ -111,7 +111,16 @@ class MontageReaderTest {
     void coincidentElectrodesAreRefused() throws IOException {
         Path f = file("label\ttheta\tphi\nCz\t0\t0\nT8\t90\t0\nT8b\t90\t0.00001\n");
         assertThatThrownBy(() -> MontageReader.read(f)).isInstanceOf(BadInputException.class)
-                .hasMessage(f + ": electrodes T8 and T8b are at the same position");
+                .hasMessage(f + " line 4: electrode T8b is at the same position as T8 (line 3)");
+    }
+
+    @Test
+    void measuredElectrodesThatCoincideOnlyAfterTheFitNameBothLines() throws IOException {
+        // not bit-identical, but 1e-5 mm apart on a head of radius ~100 mm: one direction
+        Path f = file("label\tx\ty\tz\nCz\t0\t0\t100\nFz\t0\t70\t70\nT7\t-100\t0\t0\n"
+                + "T8\t100\t0\t0\nOz\t0\t-100\t0\nFCz\t0\t70.00001\t70\n");
+        assertThatThrownBy(() -> MontageReader.read(f)).isInstanceOf(BadInputException.class)
+                .hasMessage(f + " line 7: electrode FCz is at the same position as Fz (line 3)");
     }
 
     @Test

@@ -263,8 +263,11 @@ class ReadErrorMessagesTest {
     @Test
     void sameStandardPositionTwiceNamesTheFile() throws IOException {
         Path f = file("a.tsv", "time_ms\tT3\tT7\n0\t1\t1\n4\t2\t2\n");
-        assertThat(error(f)).startsWith(f + ": the channels cannot all be placed: ")
-                .endsWith("electrodes T3 and T7 are at the same position");
+        assertThat(error(f)).isEqualTo(f + " line 1 columns 2 and 3: channels T3 and T7 take the same"
+                + " position (from standard 10-5 positions); keep one of them or give positions in a"
+                + " montage.tsv beside the data");
+        Path rows = file("b.tsv", "# unit: uV\nchannel\t0\t4\nT3\t1\t1\nCz\t1\t1\nt7\t2\t2\n");
+        assertThat(error(rows)).startsWith(rows + " lines 3 and 5 column 1: channels T3 and t7 take the same");
     }
 
     @Test

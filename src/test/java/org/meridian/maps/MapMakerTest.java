@@ -115,4 +115,17 @@ class MapMakerTest {
         assertThatThrownBy(() -> maker.map(new double[TEN_TEN.size()], Unit.MICROVOLT_PER_SQUARE_METRE, ""))
                 .isInstanceOf(BadInputException.class).hasMessageContaining("already CSD");
     }
+
+    @Test
+    void weightMemoryIsPixelsTimesColumnsOfFloats() {
+        // arithmetic: 256² pixels × (64 channels + 20 low-degree columns) × 4 bytes per float
+        assertThat(MapMaker.weightBytes(256, 64)).isEqualTo(65536L * 84 * 4);
+        // 2048² pixels of 345 channels (the audit's failing case): 6.1 GB
+        assertThat(MapMaker.weightBytes(2048, 345)).isEqualTo(4194304L * 365 * 4);
+        long budget = 3L << 30;
+        int r = MapMaker.largestResolution(345, budget);
+        assertThat(MapMaker.weightBytes(r, 345)).isLessThanOrEqualTo(budget);
+        assertThat(MapMaker.weightBytes(r + 1, 345)).isGreaterThan(budget);
+        assertThat(MapMaker.largestResolution(64, MapMaker.weightBytes(256, 64))).isEqualTo(256);
+    }
 }

@@ -96,7 +96,36 @@ class MapPartsTest {
         assertThat(ColourLimits.parse("+-2.5")).isEqualTo(ColourLimits.symmetric(2.5));
         assertThat(ColourLimits.parse("auto")).isNull();
         assertThatThrownBy(() -> ColourLimits.parse("big")).isInstanceOf(BadInputException.class)
-                .hasMessage("colour scale limit \"big\" is not auto or ±X (e.g. ±5)");
+                .hasMessage("colour limits \"big\" are not auto, ±X (e.g. ±5) or LOWER:UPPER (e.g. -2:8)");
+    }
+
+    @Test
+    void fixedLimitsMayBeAsymmetricWithZeroKeepingTheMiddleColour() {
+        ColourLimits l = ColourLimits.parse("-2:8");
+        assertThat(l).isEqualTo(new ColourLimits(-2, 8));
+        assertThat(ColourLimits.parse(" \u22122 : 8 ")).isEqualTo(l);
+        assertThat(ColourLimits.parse("2.5:1e1")).isEqualTo(new ColourLimits(2.5, 10));
+        // Moreland (2009): a diverging scale's neutral middle marks the critical value, here zero;
+        // M = max(|−2|, |8|) = 8 and position = (v + M) / 2M
+        assertThat(l.halfRange()).isEqualTo(8);
+        assertThat(l.position(0)).isEqualTo(0.5);
+        assertThat(l.position(8)).isEqualTo(1.0);
+        assertThat(l.position(-2)).isEqualTo(6.0 / 16);
+        assertThat(l.position(-7)).as("clamped to the lower limit").isEqualTo(6.0 / 16);
+        assertThat(l.position(12)).isEqualTo(1.0);
+        assertThat(ColourLimits.symmetric(8).position(-2)).isEqualTo(l.position(-2));
+        assertThat(new ColourLimits(2, 8).position(2)).isEqualTo(10.0 / 16);
+        // the bar runs linearly from the lower to the upper limit
+        assertThat(l.barFraction(3)).isEqualTo(0.5);
+        assertThat(l.barFraction(-2)).isZero();
+        // common practice: round ticks 1, 2, 2.5 or 5 × 10^k that land on both limits
+        assertThat(l.ticks()).containsExactly(-2.0, 0.0, 2.0, 4.0, 6.0, 8.0);
+        for (String bad : List.of("8:-2", "3:3", "1:", ":3", "a:b", "1:NaN", "0x1p3:9", "-2:8:9")) {
+            assertThatThrownBy(() -> ColourLimits.parse(bad)).as(bad).isInstanceOf(BadInputException.class)
+                    .hasMessageContaining("\"" + bad + "\"");
+        }
+        assertThatThrownBy(() -> ColourLimits.parse("1e999:2")).isInstanceOf(BadInputException.class)
+                .hasMessage("colour limit 1e999 is too large");
     }
 
     @Test

@@ -78,11 +78,47 @@ class MapRasterTest {
                 assertThat(argb[row * 128 + col] != 0).isEqualTo(inHead);
             }
         }
-        // a dipole toward the left ear: the left edge takes the warm end, the right edge the cool end
+        // a centred dipole toward the left ear: V = 3 p cosθ / (4πσR²) (bioelectric field textbook)
+        // is positive on the left, drawn on the left (common practice): warm left edge, cool right
         int leftEdge = argb[64 * 128 + (int) Math.round(g.column(-0.95))];
         int rightEdge = argb[64 * 128 + (int) Math.round(g.column(0.95))];
         assertThat((leftEdge >> 16) & 0xff).isGreaterThan(leftEdge & 0xff);
         assertThat(rightEdge & 0xff).isGreaterThan((rightEdge >> 16) & 0xff);
+    }
+
+    @Test
+    void renderColoursAsymmetricLimitsAsTheExactMapDoes() {
+        Montage m = StandardSystem.TEN_TEN.montage();
+        SphericalSpline spline = SphericalSpline.fit(m, SplineParameters.defaults());
+        MapRaster raster = new MapRaster(spline, Quantity.POTENTIAL, new MapLayout(m, MapExtent.head()), 128, 64);
+        double[] v = TestFields.dipolar(10, -1, 0, 0).on(m);
+        float[] values = new float[128 * 128];
+        raster.values(v, values);
+        int[] argb = new int[128 * 128];
+        int[] table = ColourScales.DIVERGING.argbTable(1024);
+        ColourLimits limits = new ColourLimits(-2, 8);
+        raster.render(v, limits, table, argb);
+        for (int p = 0; p < values.length; p++) {
+            if (!Float.isNaN(values[p])) {
+                // the same colour index as ColourLimits.position gives the exact path (MapRenderer.image),
+                // allowing one step for rounding in single precision
+                int expected = (int) Math.round(limits.position(values[p]) * (table.length - 1));
+                int got = indexOf(table, argb[p], expected);
+                assertThat(Math.abs(got - expected)).isLessThanOrEqualTo(1);
+            }
+        }
+    }
+
+    private static int indexOf(int[] table, int colour, int near) {
+        for (int d = 0; d < table.length; d++) {
+            if (near - d >= 0 && table[near - d] == colour) {
+                return near - d;
+            }
+            if (near + d < table.length && table[near + d] == colour) {
+                return near + d;
+            }
+        }
+        return -1;
     }
 
     @Test
@@ -111,7 +147,8 @@ class MapRasterTest {
         java.awt.geom.Point2D back = t.transform(new java.awt.geom.Point2D.Double(0.35, -0.6), null);
         int top = screen.getRGB((int) front.getX(), (int) front.getY());
         int bottom = screen.getRGB((int) back.getX(), (int) back.getY());
-        // a dipole toward the nose (DESIGN §8, V ∝ r·d) is warm at the top of the map (DESIGN §3, nose up)
+        // centred dipole toward the nose: V = 3 p cosθ / (4πσR²) (bioelectric field textbook) is
+        // positive at the front, drawn at the top of the map (common practice: nose up)
         assertThat((top >> 16) & 0xff).isGreaterThan((top & 0xff) + 40);
         assertThat(bottom & 0xff).isGreaterThan(((bottom >> 16) & 0xff) + 40);
         // the coarse map's contours include the zero line across the middle

@@ -3,6 +3,9 @@ package org.meridian.maps;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import java.awt.Color;
+import java.awt.Graphics2D;
+import java.awt.font.FontRenderContext;
 import java.awt.geom.AffineTransform;
 import java.awt.geom.Point2D;
 import java.awt.geom.Rectangle2D;
@@ -33,13 +36,11 @@ class MapRenderingTest {
         double widthPt = 300;
         ExportFormat.PNG.write(strip, file, widthPt / ExportFormat.PT_PER_MM, dpi);
         BufferedImage image = ImageIO.read(file.toFile());
-        // reproduce the strip's layout to find the map's square (side s, title band 0.16 s above it)
         double heightPt = widthPt / strip.aspectRatio();
-        double side = Math.min(widthPt / (1 + 0.5), heightPt / 1.16);
-        double x0 = (widthPt - side * 1.5) / 2;
-        double y0 = (heightPt - side * 1.16) / 2;
+        Rectangle2D square = strip.mapSquare(new Rectangle2D.Double(0, 0, widthPt, heightPt), 0,
+                new FontRenderContext(null, true, true));
         AffineTransform t = AffineTransform.getScaleInstance(dpi / 72.0, dpi / 72.0);
-        t.concatenate(MapRenderer.planeToDevice(new Rectangle2D.Double(x0, y0 + 0.16 * side, side, side), map.layout()));
+        t.concatenate(MapRenderer.planeToDevice(square, map.layout()));
         toPixel[0] = t;
         return image;
     }
@@ -62,17 +63,20 @@ class MapRenderingTest {
         MapMaker maker = MapMaker.of(TEN_TEN, SplineParameters.defaults(), Quantity.POTENTIAL, MapExtent.head(), 200);
         AffineTransform[] t = new AffineTransform[1];
 
-        // a centred dipole toward the left ear: V ∝ r·d is positive on the left (DESIGN §8)
+        // a centred dipole toward the left ear: V = 3 p cosθ / (4πσR²) (bioelectric field
+        // textbook) is positive on the left
         ScalpMap left = maker.map(TestFields.dipolar(10, -1, 0, 0).on(TEN_TEN), Unit.MICROVOLT, "left");
         BufferedImage image = renderPng(left, dir.resolve("left.png"), 144, t);
-        // DESIGN §3: nose up, left on the left — the positive (warm) pole is at the left of the image
+        // common practice: maps are drawn nose up with left on the left, so the positive (warm)
+        // pole is at the left of the image
         assertThat(warm(pixel(image, t[0], -0.7, 0))).isTrue();
         assertThat(cool(pixel(image, t[0], 0.7, 0))).isTrue();
         Point2D leftPixel = t[0].transform(new Point2D.Double(-0.7, 0), null);
         Point2D rightPixel = t[0].transform(new Point2D.Double(0.7, 0), null);
         assertThat(leftPixel.getX()).isLessThan(rightPixel.getX());
 
-        // a dipole toward the nose: warm at the top of the image
+        // a dipole toward the nose: positive at the front (same closed form), drawn at the top
+        // of the image (common practice: nose up)
         ScalpMap front = maker.map(TestFields.dipolar(10, 0, 1, 0).on(TEN_TEN), Unit.MICROVOLT, "front");
         image = renderPng(front, dir.resolve("front.png"), 144, t);
         assertThat(warm(pixel(image, t[0], 0, 0.7))).isTrue();
@@ -101,6 +105,48 @@ class MapRenderingTest {
         }
         assertThatThrownBy(() -> ExportFormat.of(dir.resolve("maps.gif"))).isInstanceOf(BadInputException.class)
                 .hasMessageEndingWith("maps.gif: the figure must be a .svg, .pdf, .png or .tiff file");
+    }
+
+    @Test
+    void electrodeLabelsStayInsideTheFigure() {
+        MapMaker maker = MapMaker.of(TEN_TEN, SplineParameters.defaults(), Quantity.POTENTIAL, MapExtent.electrodes(), 64);
+        ScalpMap map = maker.map(TestFields.dipolar(10, 0, 1, 0).on(TEN_TEN), Unit.MICROVOLT, "300 ms");
+        MapStrip strip = new MapStrip(List.of(map, map, map), ColourLimits.symmetric(10),
+                MapStyle.defaults().withLabels(true));
+        int width = 900;
+        int height = (int) Math.floor(width / strip.aspectRatio());
+        BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
+        g.setColor(Color.WHITE);
+        g.fillRect(0, 0, width, height);
+        Rectangle2D bounds = new Rectangle2D.Double(0, 0, width, height);
+        strip.draw(g, bounds);
+        FontRenderContext frc = g.getFontRenderContext();
+        g.dispose();
+        Rectangle2D previous = null;
+        for (int i = 0; i < 3; i++) {
+            Rectangle2D square = strip.mapSquare(bounds, i, frc);
+            Rectangle2D labels = MapRenderer.labelBounds(square, map.layout(), strip.style(), frc);
+            // Iz's label lies below the head and T9/T10's beside it: all inside the figure
+            assertThat(bounds.contains(labels)).as("map " + i + ": " + labels).isTrue();
+            if (previous != null) {
+                // and no label reaches the neighbouring map's labels
+                assertThat(labels.getMinX()).isGreaterThanOrEqualTo(previous.getMaxX());
+            }
+            previous = labels;
+        }
+        // the Iz label is drawn inside its box: dark ink pixels (all channels low, unlike any map colour)
+        Rectangle2D iz = MapRenderer.labelBounds(strip.mapSquare(bounds, 0, frc), map.layout(),
+                MapStyle.defaults().withHighlighted(List.of("Iz")), frc);
+        int ink = 0;
+        for (int y = (int) iz.getMinY(); y < Math.min(height, iz.getMaxY()); y++) {
+            for (int x = (int) iz.getMinX(); x < iz.getMaxX(); x++) {
+                int rgb = image.getRGB(x, y);
+                ink += ((rgb >> 16) & 0xff) < 80 && ((rgb >> 8) & 0xff) < 80 && (rgb & 0xff) < 80 ? 1 : 0;
+            }
+        }
+        assertThat(iz.getMaxY()).isLessThanOrEqualTo(height);
+        assertThat(ink).isGreaterThan(5);
     }
 
     @Test

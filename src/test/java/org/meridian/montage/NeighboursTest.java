@@ -40,10 +40,19 @@ class NeighboursTest {
     }
 
     @Test
-    void delaunayOfASquareGivesTwoTriangles() {
-        // Delaunay (1934): four points of a square triangulate into two triangles.
+    void delaunayOfAQuadrilateralTakesTheDiagonalWithEmptyCircumcircles() {
+        // Delaunay (1934): no point lies inside a triangle's circumcircle. For A(0,0), B(1,0),
+        // C(1,1.1), D(0,1) (not on one circle, so the answer is unique) the circle through A, B,
+        // C has AC as its diameter (right angle at B) and holds D, so the diagonal is BD:
+        // triangles ABD and BCD.
         List<int[]> t = Neighbours.triangulate(new double[][] {{0, 0}, {1, 0}, {1, 1.1}, {0, 1}});
-        assertThat(t).hasSize(2);
+        List<String> sorted = new ArrayList<>();
+        for (int[] tri : t) {
+            int[] s = tri.clone();
+            java.util.Arrays.sort(s);
+            sorted.add(java.util.Arrays.toString(s));
+        }
+        assertThat(sorted).containsExactlyInAnyOrder("[0, 1, 3]", "[1, 2, 3]");
     }
 
     @Test

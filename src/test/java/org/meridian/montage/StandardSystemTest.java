@@ -7,10 +7,12 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.meridian.core.Electrode;
 import org.meridian.core.Montage;
@@ -86,32 +88,95 @@ class StandardSystemTest {
         }
     }
 
-    @ParameterizedTest
-    @ValueSource(strings = {"AF", "F", "FC", "CP", "P", "PO"})
-    void rowsAreDividedInEqualArcs(String row) {
-        // Jasper (1958): positions along a row are equally spaced between the ring and the
-        // midline (F7, F3, Fz); ACNS (2006) halves those steps (F7, F5, F3, F1, Fz).
-        String ring = switch (row) {
-            case "FC" -> "FT7";
-            case "CP" -> "TP7";
-            default -> row + "7";
+    /** Every row between Fp and O, 10-10 and 10-5 alike (Oostenveld & Praamstra, 2001). */
+    private static final List<String> GRID_ROWS = List.of("AFp", "AF", "AFF", "F", "FFC", "FC",
+            "FCC", "C", "CCP", "CP", "CPP", "P", "PPO", "PO", "POO");
+
+    static List<String> gridRows() {
+        return GRID_ROWS;
+    }
+
+    /**
+     * A row's positions on one side from its ring point to the midline: columns 7, 7h, 5, 5h, 3,
+     * 3h, 1, 1h (or 8, 8h … 2h), then z. Columns 7 and 7h of the temporal rows take the temporal
+     * prefix (FT7, TTP7h), as named by Oostenveld &amp; Praamstra (2001).
+     */
+    private static List<String> rowToMidline(String row, int side) {
+        String outer = switch (row) {
+            case "FFC" -> "FFT";
+            case "FC" -> "FT";
+            case "FCC" -> "FTT";
+            case "C" -> "T";
+            case "CCP" -> "TTP";
+            case "CP" -> "TP";
+            case "CPP" -> "TPP";
+            default -> row;
         };
-        List<String> labels = List.of(ring, row + "5", row + "3", row + "1", row + "z");
-        double first = angleDeg(labels.get(0), labels.get(1));
-        for (int i = 2; i < labels.size(); i++) {
-            assertThat(angleDeg(labels.get(i - 1), labels.get(i))).isCloseTo(first, within(1e-9));
+        List<String> out = new ArrayList<>();
+        for (int column = 7; column >= 1; column -= 2) {
+            String prefix = column == 7 ? outer : row;
+            int number = side < 0 ? column : column + 1;
+            out.add(prefix + number);
+            out.add(prefix + number + "h");
         }
-        // and the row's three defining points and its others lie on one circle: equal arcs on
-        // a circle give equal chords, checked above through the angles
+        out.add(row + "z");
+        return out;
     }
 
     @ParameterizedTest
-    @EnumSource(StandardSystem.class)
-    void everyPositionHasUnitLength(StandardSystem system) {
-        for (Electrode e : system.montage().electrodes()) {
-            double n = Math.sqrt(e.x() * e.x() + e.y() * e.y() + e.z() * e.z());
-            assertThat(n).as(e.label()).isCloseTo(1.0, within(1e-12));
+    @MethodSource("gridRows")
+    void everyRowIsDividedInEqualArcsOnBothSides(String row) {
+        // Jasper (1958): positions along a row are equally spaced between the ring and the
+        // midline (F7, F3, Fz); ACNS (2006) halves those steps (F7, F5, F3, F1, Fz) and
+        // Oostenveld & Praamstra (2001) halve them again (the h columns), in every 10-10 and 10-5
+        // row. With the row on one circle (next test), equal chords mean equal arcs.
+        for (int side : new int[] {-1, 1}) {
+            List<String> labels = rowToMidline(row, side);
+            assertThat(labels).hasSize(9);
+            double first = angleDeg(labels.get(0), labels.get(1));
+            for (int i = 2; i < labels.size(); i++) {
+                assertThat(angleDeg(labels.get(i - 1), labels.get(i)))
+                        .as(labels.get(i - 1) + "–" + labels.get(i)).isCloseTo(first, within(1e-9));
+            }
         }
+    }
+
+    @ParameterizedTest
+    @MethodSource("gridRows")
+    void everyRowLiesInThePlaneOfItsRingPointsAndMidlinePoint(String row) {
+        // Jasper (1958): a row runs along one arc from the left ring point over the midline
+        // point to the right ring point; a circle on a sphere is its cut with a plane (textbook
+        // geometry), so every position of the row lies in the plane through those three.
+        List<String> left = rowToMidline(row, -1);
+        List<String> right = rowToMidline(row, 1);
+        Electrode a = at(left.get(0));
+        Electrode m = at(row + "z");
+        Electrode b = at(right.get(0));
+        double[] u = {m.x() - a.x(), m.y() - a.y(), m.z() - a.z()};
+        double[] v = {b.x() - a.x(), b.y() - a.y(), b.z() - a.z()};
+        double[] n = {u[1] * v[2] - u[2] * v[1], u[2] * v[0] - u[0] * v[2], u[0] * v[1] - u[1] * v[0]};
+        double length = Math.sqrt(n[0] * n[0] + n[1] * n[1] + n[2] * n[2]);
+        List<String> all = new ArrayList<>(left);
+        all.addAll(right);
+        for (String l : all) {
+            Electrode e = at(l);
+            double distance = (n[0] * (e.x() - a.x()) + n[1] * (e.y() - a.y()) + n[2] * (e.z() - a.z()))
+                    / length;
+            assertThat(distance).as(l).isCloseTo(0, within(1e-12));
+        }
+    }
+
+    @Test
+    void theGeneratorPlacesEveryPointOnTheUnitSphere() {
+        // The head is modelled as a sphere of radius 1 (Jasper, 1958, places every position on
+        // the head's surface): x² + y² + z² = 1, checked on the computed points before the
+        // Electrode constructor normalises them.
+        for (String label : StandardSystem.labels10_5()) {
+            double[] p = StandardSystem.rawPoint(label);
+            double n = Math.sqrt(p[0] * p[0] + p[1] * p[1] + p[2] * p[2]);
+            assertThat(n).as(label).isCloseTo(1.0, within(1e-12));
+        }
+        assertThat(StandardSystem.labels10_5()).hasSize(345);
     }
 
     @Test
@@ -127,6 +192,15 @@ class StandardSystemTest {
             assertThat(h.y()).isCloseTo(e.y(), within(1e-12));
             assertThat(h.z()).isCloseTo(e.z(), within(1e-12));
             assertThat(Math.signum(e.x())).isEqualTo(Labels.side(e.label()));
+        }
+        // the old names pair within their own naming and mirror too (ACNS 2006: T3 = T7,
+        // T4 = T8, T5 = P7, T6 = P8)
+        for (String old : List.of("T3", "T4", "T5", "T6")) {
+            Electrode e = Labels.standardPosition(old).orElseThrow();
+            Electrode h = Labels.standardPosition(Labels.homologue(old).orElseThrow()).orElseThrow();
+            assertThat(h.x()).as(old).isCloseTo(-e.x(), within(1e-12));
+            assertThat(h.y()).isCloseTo(e.y(), within(1e-12));
+            assertThat(h.z()).isCloseTo(e.z(), within(1e-12));
         }
     }
 

@@ -54,7 +54,10 @@ public final class TestFields {
         return out;
     }
 
-    /** The field of a dipole at the centre of a sphere pointing along d: V ∝ r·d (DESIGN §8). */
+    /**
+     * The field of a dipole at the centre of a homogeneous sphere pointing along d:
+     * V = 3 p cosθ / (4πσR²) on the surface (bioelectric field textbook), i.e. V ∝ r·d.
+     */
     public static Field dipolar(double amplitude, double dx, double dy, double dz) {
         double n = Math.sqrt(dx * dx + dy * dy + dz * dz);
         return (x, y, z) -> amplitude * (x * dx + y * dy + z * dz) / n;
