@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
@@ -17,6 +18,7 @@ import org.meridian.measure.MeasureTable;
 import org.meridian.measure.Measurement;
 import org.meridian.measure.Measures;
 import org.meridian.measure.Polarity;
+import org.meridian.measure.Region;
 import org.meridian.signal.Baseline;
 import org.meridian.signal.ConditionExpression;
 import org.meridian.signal.ConditionWave;
@@ -118,9 +120,11 @@ final class MeasureCommand implements Callable<Integer> {
         MeasureRequest.Builder request = MeasureRequest.builder().settings(settings).grand(grand)
                 .jackknife(jackknife).excluded(new LinkedHashSet<>(exclude))
                 .weighting(trialWeighted ? GrandAverage.Weighting.TRIALS : GrandAverage.Weighting.UNWEIGHTED);
+        List<TimeWindow> parsedWindows = new ArrayList<>();
         for (String w : windows) {
-            request.window(OptionErrors.about("--window", () -> TimeWindow.parse(w)));
+            parsedWindows.add(OptionErrors.about("--window", () -> TimeWindow.parse(w)));
         }
+        parsedWindows.forEach(request::window);
         for (String m : measures) {
             request.measure(OptionErrors.about("--measure", () -> Measures.byName(m)));
         }
@@ -129,10 +133,18 @@ final class MeasureCommand implements Callable<Integer> {
         Study read = StudyLoader.load(study);
         OutputGuard.requireNotInput(read, "-o", output);
         Study loaded = processing.apply(read, null);
-        Study data = baseline == null ? loaded : withBaseline(loaded);
-        for (ConditionWave c : conditionWaves(data)) {
-            request.condition(c);
+        // every option that refers to the study is checked against it here, so that an error
+        // names the option at fault (DESIGN §9)
+        for (TimeWindow w : parsedWindows) {
+            OptionErrors.about("--window", () -> w.resolve(loaded.axis()));
         }
+        Set<String> excluded = new LinkedHashSet<>(exclude);
+        OptionErrors.about("--exclude", () -> GrandAverage.weights(loaded,
+                GrandAverage.Weighting.UNWEIGHTED, excluded, p -> 1));
+        Study data = baseline == null ? loaded : OptionErrors.about("--baseline", () -> withBaseline(loaded));
+        List<ConditionWave> waves = conditionWaves(data);
+        checkChannels(data, waves, excluded);
+        waves.forEach(request::condition);
         MeasureTable table = Measurement.run(data, OptionErrors.about("--measure", request::build));
 
         if (output == null) {
@@ -171,8 +183,37 @@ final class MeasureCommand implements Callable<Integer> {
         if (baseline.trim().equalsIgnoreCase("pre")) {
             return loaded.mapWaveforms(loaded.name(), (p, c) -> Baseline.preStimulus(loaded.waveforms(p, c)));
         }
-        TimeWindow w = OptionErrors.about("--baseline", () -> TimeWindow.parse(baseline));
+        TimeWindow w = TimeWindow.parse(baseline);
+        w.resolve(loaded.axis());
         return loaded.mapWaveforms(loaded.name(), (p, c) -> Baseline.correct(loaded.waveforms(p, c), w));
+    }
+
+    /**
+     * Reads every {@code --channels} entry against the channels of each wave (a lateralised
+     * wave has only the right-hemisphere labels of its pairs), taken from the first included
+     * participant.
+     */
+    private void checkChannels(Study data, List<ConditionWave> waves, Set<String> excluded) {
+        if (channels.isEmpty()) {
+            return;
+        }
+        int first = 0;
+        while (GrandAverage.isExcluded(data.participants().get(first), excluded)) {
+            first++;
+        }
+        for (ConditionWave wave : waves) {
+            List<String> labels = wave.forParticipant(data, first).labels();
+            String where = labels.equals(data.channelLabels()) ? "" : wave.name() + ": ";
+            for (String spec : channels) {
+                OptionErrors.about("--channels", () -> {
+                    try {
+                        return Region.parse(spec, labels);
+                    } catch (BadInputException e) {
+                        throw new BadInputException(where + e.getMessage(), e);
+                    }
+                });
+            }
+        }
     }
 
     /** Warnings one per line, at most {@link #WARNINGS_SHOWN}, then how many more there were. */
@@ -186,6 +227,4 @@ final class MeasureCommand implements Callable<Integer> {
                     + " their values are empty cells or marked in the measure column");
         }
     }
-
-    /** Runs a step that reads an option, naming the option in its error. */
 }

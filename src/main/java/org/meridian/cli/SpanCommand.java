@@ -86,6 +86,12 @@ final class SpanCommand implements Callable<Integer> {
             description = "Level of the verdict (default: ${DEFAULT-VALUE}).")
     double alpha;
 
+    @Option(names = "--whiten", description = "Run the more conservative variant of the span "
+            + "test that first whitens each participant's pair of part maps (fewer false alarms "
+            + "and less power at high noise; its statistic has no unit). Default: the test as "
+            + "defined, on the maps as measured.")
+    boolean whiten;
+
     @Option(names = "--max-states", paramLabel = "K", defaultValue = "8",
             description = "Largest number of topographic states tried (default: ${DEFAULT-VALUE}).")
     int maxStates;
@@ -110,7 +116,7 @@ final class SpanCommand implements Callable<Integer> {
         SpanSettings settings = OptionErrors.about("--window", () -> SpanSettings.window(w))
                 .withCsd(csd).withSpline(spline.parameters())
                 .withSegmentation(maxStates, restarts).withPermutations(permutations, seed)
-                .withAlpha(alpha);
+                .withAlpha(alpha).withWhitening(whiten);
         if (split != null) {
             settings = settings.withSplitMs(split);
         }

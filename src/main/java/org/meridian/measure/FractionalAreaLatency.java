@@ -8,7 +8,10 @@ import org.meridian.core.Unit;
  * its total over the window. Between two samples the time is interpolated linearly in the
  * running area: with A_i &lt; f·A ≤ A_{i+1}, t = t_i + (f·A − A_i) / (A_{i+1} − A_i) · Δt.
  * For the signed wave the running area need not grow steadily; the first time it reaches f·A
- * (in the direction of the total's sign) counts. No area at all leaves the value empty.
+ * (in the direction of the total's sign) counts. No area at all leaves the value empty. When
+ * rounding leaves every step a hair short of f·A (typically f = 1, the total being summed in
+ * another order), the time at which the running area first reached its largest value is
+ * reported: for f = 1 the end of the last interval with area, not the window's end.
  */
 final class FractionalAreaLatency implements Measure {
 
@@ -40,6 +43,10 @@ final class FractionalAreaLatency implements Measure {
         double[] x = t.values();
         double dt = t.stepMs();
         double running = 0;
+        // where the running area first reached its largest value: the answer when rounding
+        // leaves every step a hair short of the target (f near 1, the total summed otherwise)
+        double highest = 0;
+        double highestAt = t.timeMs(t.to());
         for (int i = t.from(); i < t.to(); i++) {
             double a = x[i];
             double b = x[i + 1];
@@ -52,8 +59,11 @@ final class FractionalAreaLatency implements Measure {
                 return Score.of(t.timeMs(i) + Math.max(0, share) * dt);
             }
             running = next;
+            if (running > highest) {
+                highest = running;
+                highestAt = t.timeMs(i + 1);
+            }
         }
-        // rounding can leave the last step a hair short of a fraction of 1
-        return Score.of(t.timeMs(t.to()));
+        return Score.of(highestAt);
     }
 }

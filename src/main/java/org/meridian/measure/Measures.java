@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.meridian.core.BadInputException;
-import org.meridian.montage.Labels;
+import org.meridian.signal.NearestName;
 
 /** The registry of measures, in the order help texts list them. */
 public final class Measures {
@@ -45,15 +45,7 @@ public final class Measures {
                 return m;
             }
         }
-        String nearest = null;
-        int best = Integer.MAX_VALUE;
-        for (Measure m : ALL) {
-            int d = Labels.editDistance(wanted, m.name());
-            if (d < best) {
-                best = d;
-                nearest = m.name();
-            }
-        }
+        String nearest = NearestName.among(wanted, names());
         throw new BadInputException("no measure \"" + name.trim() + "\"; did you mean \"" + nearest
                 + "\"? (measures: " + String.join(", ", names()) + ")");
     }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Waveforms;
 import org.meridian.montage.Labels;
+import org.meridian.signal.NearestName;
 
 /**
  * A channel, or a region of channels written {@code P3+Pz+P4}: measured as the mean wave of its
@@ -99,15 +100,9 @@ public record Region(String label, List<String> channels) {
     }
 
     private static String nearestHint(String wanted, List<String> labels) {
-        String best = null;
-        int bestDistance = Integer.MAX_VALUE;
-        for (String l : labels) {
-            int d = Labels.editDistance(wanted.toLowerCase(Locale.ROOT), l.toLowerCase(Locale.ROOT));
-            if (d < bestDistance) {
-                bestDistance = d;
-                best = l;
-            }
-        }
+        String best = NearestName.among(wanted, labels);
+        int bestDistance = best == null ? Integer.MAX_VALUE
+                : Labels.editDistance(wanted.toLowerCase(Locale.ROOT), best.toLowerCase(Locale.ROOT));
         return best != null && bestDistance <= Math.max(1, wanted.length() / 2)
                 ? "; did you mean " + best + "?" : " (channels: " + abbreviate(labels) + ")";
     }

@@ -2,9 +2,7 @@ package org.meridian.signal;
 
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
-import org.meridian.montage.Labels;
 
 /**
  * Recursive-descent reader of condition expressions (see {@link ConditionExpression} for the
@@ -199,19 +197,9 @@ final class ExpressionParser {
         return l;
     }
 
-    /** The known condition nearest in edit distance (ignoring case); the first on ties. */
+    /** The known condition nearest to what was written ({@link NearestName}). */
     private String nearest(String written) {
-        String best = null;
-        int bestDistance = Integer.MAX_VALUE;
-        String w = written.toLowerCase(Locale.ROOT);
-        for (String c : conditions) {
-            int d = Labels.editDistance(w, c.toLowerCase(Locale.ROOT));
-            if (d < bestDistance) {
-                bestDistance = d;
-                best = c;
-            }
-        }
-        return best;
+        return NearestName.among(written, conditions);
     }
 
     private String quoted() {

@@ -23,7 +23,8 @@ import org.meridian.stats.SignFlipTest;
  *     {@link SurfaceLaplacian}).</li>
  * <li>Their unweighted grand average gives the descriptive trace and segmentation; the grand
  *     averages of alternate participants (two halves) cross-validate the number of states.</li>
- * <li>Each participant's early and late mean maps give the span test.</li>
+ * <li>Each participant's early and late mean maps give the span test (DESIGN §7; its whitened
+ *     variant only when the settings ask for it).</li>
  * </ol>
  */
 public final class SpanAnalysis {
@@ -52,7 +53,8 @@ public final class SpanAnalysis {
             late[p] = parts[1];
         }
         SignFlipTest flips = SignFlipTest.withRandomPatterns(settings.permutations(), settings.seed());
-        SpanTest.Result test = SpanTest.run(early, late, flips, settings.alpha(), progress);
+        SpanTest.Result test = SpanTest.run(early, late, flips, settings.alpha(), progress,
+                settings.whiten());
         return new SpanReport(condition, settings, d.window(), d.grand().unit(), fields.channels,
                 fields.leftOut, study.participants(), d.trace(), d.segmentation(), test);
     }

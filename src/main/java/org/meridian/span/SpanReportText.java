@@ -37,15 +37,19 @@ public final class SpanReportText {
         add(out, "reference_ms", SpanWindow.fmt(r.trace().referenceMs()));
         add(out, "reference", r.settings().referenceMs().isPresent() ? "given time" : "GFP maximum");
         Segmentation s = r.segmentation();
-        add(out, "states", s.k() + " (descriptive; chosen by cross-validation among 1.."
+        add(out, "segmentation", "descriptive (states chosen by cross-validation among 1.."
                 + r.settings().maxStates() + ")");
-        add(out, "segments", s.segments().size() + " (descriptive)");
+        add(out, "states", Integer.toString(s.k()));
+        add(out, "segments", Integer.toString(s.segments().size()));
         int i = 1;
         for (Segment seg : s.segments()) {
             add(out, "segment_" + i++, "state " + seg.state() + ", " + SpanWindow.fmt(seg.startMs())
                     + ".." + SpanWindow.fmt(seg.endMs()) + " ms");
         }
+        add(out, "test", t.whitened() ? "span test, whitened part pairs (--whiten; conservative variant)"
+                : "span test");
         add(out, "statistic", number(t.statistic()));
+        add(out, "statistic_unit", t.whitened() ? "none" : squared(r.unit().symbol()));
         add(out, "diss", fixed(t.diss(), 4));
         add(out, "p", number(t.p()));
         add(out, "patterns", t.randomisation().exact()
@@ -107,6 +111,11 @@ public final class SpanReportText {
             sb.append('\n');
         }
         return sb.toString();
+    }
+
+    /** µV → µV², µV/m² → (µV/m²)². */
+    static String squared(String unit) {
+        return unit.contains("/") ? "(" + unit + ")²" : unit + "²";
     }
 
     private static void add(List<Map.Entry<String, String>> out, String key, String value) {

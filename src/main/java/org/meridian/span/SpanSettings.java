@@ -19,10 +19,12 @@ import org.meridian.spline.SplineParameters;
  * @param permutations random sign-flip patterns when there are more than 16 participants
  * @param seed         seed of the random patterns and of the k-means starts
  * @param alpha        level of the verdict
+ * @param whiten       run the conservative variant of the span test that first whitens the
+ *                     part pairs ({@link PairWhitening}); false for the test of DESIGN §7
  */
 public record SpanSettings(TimeWindow window, OptionalDouble splitMs, OptionalDouble referenceMs,
         boolean csd, SplineParameters spline, int maxStates, int restarts, int permutations,
-        long seed, double alpha) {
+        long seed, double alpha, boolean whiten) {
 
     public static final int DEFAULT_MAX_STATES = 8;
     public static final int DEFAULT_RESTARTS = 20;
@@ -48,11 +50,14 @@ public record SpanSettings(TimeWindow window, OptionalDouble splitMs, OptionalDo
         }
     }
 
-    /** The window with the defaults: middle split, GFP-maximum reference, potential, … */
+    /**
+     * The window with the defaults: middle split, GFP-maximum reference, potential, the span
+     * test of DESIGN §7 (no whitening), …
+     */
     public static SpanSettings window(TimeWindow window) {
         return new SpanSettings(window, OptionalDouble.empty(), OptionalDouble.empty(), false,
                 SplineParameters.defaults(), DEFAULT_MAX_STATES, DEFAULT_RESTARTS,
-                DEFAULT_PERMUTATIONS, DEFAULT_SEED, DEFAULT_ALPHA);
+                DEFAULT_PERMUTATIONS, DEFAULT_SEED, DEFAULT_ALPHA, false);
     }
 
     /** The window [startMs, endMs] with the defaults. */
@@ -62,36 +67,42 @@ public record SpanSettings(TimeWindow window, OptionalDouble splitMs, OptionalDo
 
     public SpanSettings withSplitMs(double ms) {
         return new SpanSettings(window, OptionalDouble.of(ms), referenceMs, csd, spline, maxStates,
-                restarts, permutations, seed, alpha);
+                restarts, permutations, seed, alpha, whiten);
     }
 
     public SpanSettings withReferenceMs(double ms) {
         return new SpanSettings(window, splitMs, OptionalDouble.of(ms), csd, spline, maxStates,
-                restarts, permutations, seed, alpha);
+                restarts, permutations, seed, alpha, whiten);
     }
 
     public SpanSettings withCsd(boolean useCsd) {
         return new SpanSettings(window, splitMs, referenceMs, useCsd, spline, maxStates, restarts,
-                permutations, seed, alpha);
+                permutations, seed, alpha, whiten);
     }
 
     public SpanSettings withSpline(SplineParameters parameters) {
         return new SpanSettings(window, splitMs, referenceMs, csd, parameters, maxStates, restarts,
-                permutations, seed, alpha);
+                permutations, seed, alpha, whiten);
     }
 
     public SpanSettings withSegmentation(int newMaxStates, int newRestarts) {
         return new SpanSettings(window, splitMs, referenceMs, csd, spline, newMaxStates, newRestarts,
-                permutations, seed, alpha);
+                permutations, seed, alpha, whiten);
     }
 
     public SpanSettings withPermutations(int newPermutations, long newSeed) {
         return new SpanSettings(window, splitMs, referenceMs, csd, spline, maxStates, restarts,
-                newPermutations, newSeed, alpha);
+                newPermutations, newSeed, alpha, whiten);
     }
 
     public SpanSettings withAlpha(double newAlpha) {
         return new SpanSettings(window, splitMs, referenceMs, csd, spline, maxStates, restarts,
-                permutations, seed, newAlpha);
+                permutations, seed, newAlpha, whiten);
+    }
+
+    /** The span test of DESIGN §7 (false) or its conservative whitened variant (true). */
+    public SpanSettings withWhitening(boolean whitenPairs) {
+        return new SpanSettings(window, splitMs, referenceMs, csd, spline, maxStates, restarts,
+                permutations, seed, alpha, whitenPairs);
     }
 }

@@ -6,7 +6,7 @@ import org.meridian.core.Waveforms;
  * The maps of one set of waveforms over the samples of a window, as doubles, with their GFP
  * and their normalised maps (mean 0, GFP 1; NaN for a flat map), computed once for the
  * stability trace, the correlation matrix and the segmentation. Every channel of the waveforms
- * counts: choose the field's channels first (see {@link FieldChannels}).
+ * counts: choose the field's channels first (see {@link SpanAnalysis#fieldChannels}).
  */
 public final class WindowMaps {
     private final SpanWindow window;

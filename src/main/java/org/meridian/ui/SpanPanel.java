@@ -178,7 +178,7 @@ final class SpanPanel extends JPanel {
         int sample = bench.state().axis().nearestIndex(t);
         int k = sample - data.window().first();
         String diss = k >= 0 && k < data.trace().size()
-                ? String.format(Locale.ROOT, "  DISS %.3f  state %d", data.trace().diss(k), data.segmentation().state(k)) : "";
+                ? String.format(Locale.ROOT, "  DISS %.3f  state %d (descriptive)", data.trace().diss(k), data.segmentation().state(k)) : "";
         String unit = data.quantity() == MapQuantity.CSD ? "µV/m²" : "µV";
         return new String[] {"GFP", w == null ? "" : Texts.value(w.gfp(data.quantity())[sample], unit) + diss};
     }

@@ -11,9 +11,14 @@ import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.HorizontalAlignment;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleEdge;
+import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.chart.ui.TextAnchor;
+import org.jfree.chart.ui.VerticalAlignment;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.meridian.core.TimeAxis;
@@ -24,8 +29,8 @@ import org.meridian.span.StabilityTrace;
 /**
  * The span view's traces over the window (with a margin of context on either side): the GFP of
  * the map wave, its DISS against the reference map (the map at the GFP maximum, marked), and the
- * topographic states as coloured runs, each numbered. The split of the span test (the middle of
- * the window) is a dashed line.
+ * topographic states as coloured runs, each numbered and captioned as descriptive. The split of
+ * the span test (the middle of the window) is a dashed line.
  */
 final class SpanTraces {
     /** Context shown on each side of the window, as a share of its width. */
@@ -77,7 +82,8 @@ final class SpanTraces {
         dissAxis.setTickUnit(new org.jfree.chart.axis.NumberTickUnit(1));
         XYPlot dissPlot = plot(new XYSeriesCollection(diss), dissAxis, theme.ink(), ChartStyle.WAVE);
 
-        NumberAxis stateAxis = axisNamed("States", false);
+        // the strip is too low for a vertical label; its caption sits under the time axis
+        NumberAxis stateAxis = axisNamed("", false);
         stateAxis.setRange(0, 1);
         stateAxis.setTickLabelsVisible(false);
         stateAxis.setTickMarksVisible(false);
@@ -91,7 +97,7 @@ final class SpanTraces {
                 XYTextAnnotation label = new XYTextAnnotation(String.valueOf(s.state()), (s.startMs() + s.endMs()) / 2, 0.5);
                 label.setFont(ChartStyle.font(ChartStyle.tickFont().getSize2D(), Font.BOLD));
                 label.setPaint(Theme.inkOn(c));
-                label.setToolTipText("State " + s.state() + ": " + Texts.window(s.startMs(), s.endMs()));
+                label.setToolTipText("State " + s.state() + " (descriptive): " + Texts.window(s.startMs(), s.endMs()));
                 states.addAnnotation(label);
             }
         }
@@ -108,6 +114,9 @@ final class SpanTraces {
         ChartStyle.apply(chart, theme);
         states.setDomainGridlinesVisible(false);
         states.setRangeGridlinesVisible(false);
+        chart.addSubtitle(new TextTitle("Coloured strip: states (descriptive)", ChartStyle.tickFont(), theme.ink(),
+                RectangleEdge.BOTTOM, HorizontalAlignment.LEFT, VerticalAlignment.CENTER,
+                new RectangleInsets(0, 4, 2, 0)));
         return chart;
     }
 

@@ -128,7 +128,7 @@ class MeasureCommandTest {
                 + " character 8: no condition \"comon\"; did you mean \"common\"?" + System.lineSeparator());
         CliRun outside = CliRun.of("measure", folder.toString(), "--window", "600:900", "--measure", "mean");
         assertThat(outside.exitCode()).isEqualTo(2);
-        assertThat(outside.err()).startsWith("error: window 600:900 ms lies outside the data (-100..696 ms)");
+        assertThat(outside.err()).startsWith("error: option --window: window 600:900 ms lies outside the data (-100..696 ms)");
         CliRun measure = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure", "peek");
         assertThat(measure.err()).startsWith("error: option --measure: no measure \"peek\"; did you mean \"peak\"?");
         CliRun signed = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure", "peak",
@@ -138,11 +138,41 @@ class MeasureCommandTest {
         assertThat(window.err()).startsWith("error: option --window: window \"200-500\" is not START:END");
         CliRun channel = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure", "mean",
                 "--channels", "Pzz");
-        assertThat(channel.err()).startsWith("error: no channel Pzz; did you mean Pz?");
+        assertThat(channel.err()).startsWith("error: option --channels: no channel Pzz; did you mean Pz?");
         CliRun fraction = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure", "mean",
                 "--fraction", "1.5");
         assertThat(fraction.err()).startsWith("error: option --fraction: fraction must lie in (0, 1]");
         assertThat(List.of(measure, signed, window, channel, fraction)).allMatch(x -> x.exitCode() == 2);
+    }
+
+    @Test
+    void optionsThatReferToTheStudyNameTheOptionWhenTheStudyLacksWhatTheyAskFor() {
+        // DESIGN §9: every error names the option at fault
+        CliRun exclude = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--exclude", "p99");
+        assertThat(exclude.err()).startsWith("error: option --exclude: cannot exclude participant p99: ");
+        CliRun everyone = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--exclude", "p01,p02,p03");
+        assertThat(everyone.err()).startsWith("error: option --exclude: no participants left");
+        CliRun baseline = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--baseline", "-300:0");
+        assertThat(baseline.err()).startsWith("error: option --baseline: window -300:0 ms lies outside the data (-100..696 ms)");
+        CliRun badBaseline = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--baseline", "early");
+        assertThat(badBaseline.err()).startsWith("error: option --baseline: window \"early\" is not START:END");
+        CliRun region = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--channels", "P3+Pq");
+        assertThat(region.err()).startsWith("error: option --channels: no channel Pq");
+        // a lateralised wave has only the right-hemisphere labels of its pairs
+        CliRun lateral = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--lateralised", "rare,common", "--channels", "PO7");
+        assertThat(lateral.err()).startsWith("error: option --channels: contra-ipsi(left: rare, right: common): no channel PO7");
+        CliRun condition = CliRun.of("measure", folder.toString(), "--window", "200:500", "--measure",
+                "mean", "--conditions", "rare, 'often'");
+        assertThat(condition.err()).startsWith("error: option --conditions: ");
+        assertThat(List.of(exclude, everyone, baseline, badBaseline, region, lateral, condition))
+                .allMatch(x -> x.exitCode() == 2)
+                .allMatch(x -> x.err().lines().count() == 1);
     }
 
     @Test

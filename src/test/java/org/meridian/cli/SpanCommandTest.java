@@ -22,7 +22,12 @@ class SpanCommandTest {
         assertThat(lines.subList(0, header)).allMatch(l -> l.startsWith("# "));
         assertThat(lines.subList(0, header)).contains("# condition: rare", "# window_ms: 260..460",
                 "# participants: 16", "# unit: uV");
-        assertThat(lines.subList(0, header)).anyMatch(l -> l.startsWith("# segments: ") && l.endsWith("(descriptive)"));
+        // issue 6 (descriptive, labelled so) with plain numbers in states and segments
+        assertThat(lines.subList(0, header)).contains(
+                "# segmentation: descriptive (states chosen by cross-validation among 1..8)",
+                "# test: span test", "# statistic_unit: µV²");
+        assertThat(lines.subList(0, header)).anyMatch(l -> l.matches("# segments: \\d+"));
+        assertThat(lines.subList(0, header)).anyMatch(l -> l.matches("# states: \\d+"));
         // DESIGN §9 summary keys
         for (String key : List.of("reference_ms", "segments", "diss", "p", "verdict")) {
             assertThat(lines).anyMatch(l -> l.startsWith("# " + key + ": "));
@@ -49,10 +54,21 @@ class SpanCommandTest {
     }
 
     @Test
+    void whitenRunsTheConservativeVariant(@TempDir Path dir) {
+        Path out = dir.resolve("span.tsv");
+        CliRun r = CliRun.of("span", DEMO, "--condition", "rare", "--window", "260:460", "--whiten",
+                "-o", out.toString());
+        assertThat(r.exitCode()).as(r.err()).isZero();
+        assertThat(r.out()).contains("test: span test, whitened part pairs (--whiten; conservative variant)\n",
+                "statistic_unit: none\n");
+    }
+
+    @Test
     void csdIsAnalysedInMicrovoltsPerSquareMetre() {
         CliRun r = CliRun.of("span", DEMO, "--condition", "rare", "--window", "260:460", "--csd");
         assertThat(r.exitCode()).as(r.err()).isZero();
-        assertThat(r.out()).contains("# maps: CSD (µV/m²)\n", "# unit: uV/m2\n");
+        assertThat(r.out()).contains("# maps: CSD (µV/m²)\n", "# unit: uV/m2\n",
+                "# statistic_unit: (µV/m²)²\n");
     }
 
     @Test

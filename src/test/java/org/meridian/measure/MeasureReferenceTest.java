@@ -149,4 +149,67 @@ class MeasureReferenceTest {
             }
         }
     }
+
+    /**
+     * DESIGN §6.3 read literally: the time at which the running area of the chosen part, taken
+     * interval by interval from the window start, first reaches f of its total, interpolated
+     * linearly in the running area.
+     */
+    private static double fractionalAreaLatencyByDefinition(double[] x, int from, int to, double dt,
+            Polarity polarity, double f) {
+        double[] negated = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            negated[i] = -x[i];
+        }
+        double[] piece = new double[to - from];
+        double total = 0;
+        for (int j = from; j < to; j++) {
+            piece[j - from] = switch (polarity) {
+                case POSITIVE -> positiveAreaByDefinition(x, j, j + 1, dt);
+                case NEGATIVE -> positiveAreaByDefinition(negated, j, j + 1, dt);
+                case SIGNED -> (x[j] + x[j + 1]) / 2 * dt;
+            };
+            total += piece[j - from];
+        }
+        double direction = Math.signum(total);
+        double target = f * total * direction;
+        double running = 0;
+        for (int j = from; j < to; j++) {
+            double next = running + direction * piece[j - from];
+            if (next >= target) {
+                return AXIS.timeMs(j) + (next == running ? 0 : (target - running) / (next - running)) * dt;
+            }
+            running = next;
+        }
+        return AXIS.timeMs(to);
+    }
+
+    @Test
+    void theFractionalAreaSearchFindsWhatTheDefinitionFinds() {
+        Random random = new Random(29);
+        MeasureSettings base = MeasureSettings.defaults();
+        for (int trial = 0; trial < 600; trial++) {
+            double[] x = wave(random, trial % 4);
+            int from = random.nextInt(150);
+            int to = from + 1 + random.nextInt(AXIS.samples() - from - 1);
+            Polarity polarity = Polarity.values()[trial % 3];
+            // f = 1 in every fifth trial: the running area must end where the part's area ends,
+            // however the total was summed
+            double f = trial % 5 == 0 ? 1.0 : 0.05 + 0.9 * random.nextDouble();
+            // shifted well above or below zero, or not at all
+            double shift = trial % 7 == 0 ? 0 : (random.nextBoolean() ? 6 : -6);
+            for (int i = 0; i < x.length; i++) {
+                x[i] += shift;
+            }
+            Trace t = new Trace(x, AXIS, from, to);
+            Score s = Measures.byName("frac-area-latency").score(t, base.withPolarity(polarity).withFraction(f));
+            double expected = fractionalAreaLatencyByDefinition(x, from, to, AXIS.stepMs(), polarity, f);
+            if (s.isEmpty()) {
+                // only when there is no area of that part at all
+                assertThat(t.area(polarity)).isZero();
+            } else {
+                assertThat(s.value()).as("trial %d", trial).isCloseTo(expected, within(1e-6));
+            }
+        }
+    }
 }

@@ -74,6 +74,10 @@ class ConditionExpressionTest {
         assertThat(e.getMessage()).isEqualTo("condition expression \"rare - comon\", character 8: "
                 + "no condition \"comon\"; did you mean \"common\"?");
         assertThat(error("'go lft' - rare").suggestion()).contains("go left");
+        // NearestName: a name that begins with what was written is suggested first
+        assertThatThrownBy(() -> ConditionExpression.parse("rare - freq", List.of("rare", "frequent")))
+                .isInstanceOfSatisfying(ExpressionSyntaxException.class,
+                        x -> assertThat(x.suggestion()).contains("frequent"));
     }
 
     @Test

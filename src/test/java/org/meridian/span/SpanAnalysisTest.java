@@ -2,6 +2,7 @@ package org.meridian.span;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -64,6 +65,51 @@ class SpanAnalysisTest {
         assertThat(r.test().randomisation().exact()).isTrue();
         assertThat(r.segmentation().k()).isGreaterThanOrEqualTo(2);
         assertThat(r.participants()).hasSize(12);
+    }
+
+    @Test
+    void theTestRunsOnTheParticipantsPartMapsAsMeasuredUnlessWhiteningIsAsked() {
+        Study s = study(8, true, 7);
+        SpanReport r = SpanAnalysis.run(s, "rare", p -> s.waveforms(p, 0),
+                SpanSettings.window(260, 420), Progress.NONE);
+        // the part maps recomputed here: each participant's positioned channels averaged over
+        // 260..336 and 344..420 ms, then average-referenced (DESIGN §7)
+        int n = 8;
+        double[][] early = new double[n][];
+        double[][] late = new double[n][];
+        for (int p = 0; p < n; p++) {
+            Waveforms w = s.waveforms(p, 0).select(r.channels());
+            early[p] = partMean(w, 260, 336);
+            late[p] = partMean(w, 344, 420);
+        }
+        SpanResiduals expected = new SpanResiduals(early, late);
+        assertThat(r.test().whitened()).isFalse();
+        assertThat(r.test().statistic()).isCloseTo(expected.statistic(), within(1e-9 * expected.statistic()));
+        SpanReport w = SpanAnalysis.run(s, "rare", p -> s.waveforms(p, 0),
+                SpanSettings.window(260, 420).withWhitening(true), Progress.NONE);
+        assertThat(w.test().whitened()).isTrue();
+        assertThat(w.test().diss()).isEqualTo(r.test().diss());
+        assertThat(w.test().statistic()).isNotCloseTo(r.test().statistic(), within(1e-3 * r.test().statistic()));
+    }
+
+    private static double[] partMean(Waveforms w, double fromMs, double toMs) {
+        double[] m = new double[w.channelCount()];
+        for (int c = 0; c < m.length; c++) {
+            int count = 0;
+            for (int t = 0; t < w.sampleCount(); t++) {
+                double ms = w.axis().timeMs(t);
+                if (ms >= fromMs - 1e-9 && ms <= toMs + 1e-9) {
+                    m[c] += w.value(c, t);
+                    count++;
+                }
+            }
+            m[c] /= count;
+        }
+        double mean = java.util.Arrays.stream(m).average().orElseThrow();
+        for (int c = 0; c < m.length; c++) {
+            m[c] -= mean;
+        }
+        return m;
     }
 
     @Test

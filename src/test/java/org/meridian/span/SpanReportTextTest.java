@@ -20,7 +20,15 @@ class SpanReportTextTest {
         assertThat(keys).contains("reference_ms", "segments", "diss", "p", "verdict");
         assertThat(keys).containsSubsequence("segments", "segment_1");
         Map<String, String> m = Map.ofEntries(SpanReportText.summary(r).toArray(Map.Entry[]::new));
-        assertThat(m.get("segments")).endsWith("(descriptive)");
+        // issue 6: the segmentation is labelled descriptive on its own key, so that states and
+        // segments stay plain numbers a script can read
+        assertThat(m.get("segmentation")).startsWith("descriptive (");
+        assertThat(keys).containsSubsequence("segmentation", "states", "segments");
+        assertThat(m.get("states")).isEqualTo(Integer.toString(r.segmentation().k()));
+        assertThat(m.get("segments")).isEqualTo(Integer.toString(r.segmentation().segments().size()));
+        // the default is the test of DESIGN §7, its statistic in squared map units
+        assertThat(m.get("test")).isEqualTo("span test");
+        assertThat(m.get("statistic_unit")).isEqualTo("µV²");
         assertThat(m.get("verdict")).isIn("stable", "changes");
         assertThat(m.get("p")).isEqualTo(SpanReportText.number(r.test().p()));
         // 6 participants: exact, smallest p = 2/64 = 0.03125 < 0.05, so no note
@@ -39,6 +47,18 @@ class SpanReportTextTest {
         String[] matrix = SpanReportText.correlationMatrix(r).split("\n");
         assertThat(matrix).hasSize(42);
         assertThat(matrix[1].split("\t")).hasSize(42);
+    }
+
+    @Test
+    void theWhitenedVariantIsNamedAndItsStatisticHasNoUnit() {
+        Study s = SpanAnalysisTest.study(6, true, 9);
+        SpanReport r = SpanAnalysis.run(s, "rare", p -> s.waveforms(p, 0),
+                SpanSettings.window(260, 420).withWhitening(true), Progress.NONE);
+        Map<String, String> m = Map.ofEntries(SpanReportText.summary(r).toArray(Map.Entry[]::new));
+        assertThat(m.get("test")).contains("--whiten");
+        assertThat(m.get("statistic_unit")).isEqualTo("none");
+        // common practice: a squared compound unit is written in parentheses
+        assertThat(SpanReportText.squared("µV/m²")).isEqualTo("(µV/m²)²");
     }
 
     @Test

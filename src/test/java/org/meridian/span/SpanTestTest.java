@@ -52,8 +52,9 @@ class SpanTestTest {
             late[i] = scaled(m, b);
         }
         SpanTest.Result r = SpanTest.run(early, late, FLIPS, 0.05, Progress.NONE);
-        // DESIGN §7: x_i, y_i multiples of one map ⇒ every d_i = 0 (P⊥ removes the map), so S = 0;
-        // with every pattern tied, p = 1 (exact enumeration, N = 12)
+        // algebraic identity: with x_i = a_i m and y_i = b_i m, α_x·y_i − α_y·x_i is a multiple of
+        // m = ±|m|u and P⊥ removes u, so every d_i = 0 and S = 0; with every pattern tied,
+        // p = 1 (exact enumeration, N = 12)
         assertThat(r.statistic()).isZero();
         assertThat(r.p()).isEqualTo(1.0);
         assertThat(r.verdict()).isEqualTo(SpanVerdict.STABLE);
@@ -63,6 +64,9 @@ class SpanTestTest {
             early[i] = scaled(m, 2.0 + i);
         }
         assertThat(new SpanResiduals(early, late).statistic()).isZero();
+        // the same holds for the whitened variant: whitening mixes each pair by one 2 × 2 matrix,
+        // and a mix of two multiples of m is a multiple of m
+        assertThat(SpanTest.run(early, late, FLIPS, 0.05, Progress.NONE, true).statistic()).isZero();
     }
 
     @Test
@@ -108,27 +112,74 @@ class SpanTestTest {
     }
 
     @Test
-    void resultDoesNotDependOnTheOverallScaleOrTheSignOfTheData() {
+    void theDefaultTestWorksOnTheMapsAsMeasured() {
         double[][][] s = twoMapStudy(9, 10, 16, new double[] {1, 0.5}, new double[] {0.5, 1}, 1.0);
         SpanTest.Result a = SpanTest.run(s[0], s[1], FLIPS, 0.05, Progress.NONE);
+        assertThat(a.whitened()).isFalse();
+        // DESIGN §7: S = Σ_c (mean_i d_ic)² of the unwhitened residuals, recomputed here from
+        // the definition with the leading left singular vector from Commons Math SVD
+        double[] x = SpanTest.grandMean(s[0]);
+        double[] y = SpanTest.grandMean(s[1]);
+        double[][] m = new double[16][2];
+        for (int c = 0; c < 16; c++) {
+            m[c][0] = x[c];
+            m[c][1] = y[c];
+        }
+        double[] u = new SingularValueDecomposition(new Array2DRowRealMatrix(m)).getU().getColumn(0);
+        double ax = SpanResiduals.dot(x, u);
+        double ay = SpanResiduals.dot(y, u);
+        double[] mean = new double[16];
+        for (int i = 0; i < 10; i++) {
+            double[] d = new double[16];
+            for (int c = 0; c < 16; c++) {
+                d[c] = (ax * s[1][i][c] - ay * s[0][i][c]) / Math.hypot(ax, ay);
+            }
+            double along = SpanResiduals.dot(d, u);
+            for (int c = 0; c < 16; c++) {
+                mean[c] += (d[c] - along * u[c]) / 10;
+            }
+        }
+        assertThat(a.statistic()).isCloseTo(SpanResiduals.dot(mean, mean), within(1e-9 * a.statistic()));
+    }
+
+    @Test
+    void scaleAndPolarityChangeOnlyTheUnitOfTheStatistic() {
+        double[][][] s = twoMapStudy(9, 10, 16, new double[] {1, 0.5}, new double[] {0.5, 1}, 1.0);
         double[][] e2 = new double[10][];
         double[][] l2 = new double[10][];
         for (int i = 0; i < 10; i++) {
             e2[i] = scaled(s[0][i], -1e-3);
             l2[i] = scaled(s[1][i], -1e-3);
         }
-        SpanTest.Result b = SpanTest.run(e2, l2, FLIPS, 0.05, Progress.NONE);
-        // common practice: a change of unit (µV → mV) and of polarity convention changes nothing;
-        // after the whitening S has no unit at all
-        assertThat(b.p()).isEqualTo(a.p());
-        assertThat(b.statistic()).isCloseTo(a.statistic(), within(1e-9 * a.statistic()));
-        assertThat(b.diss()).isCloseTo(a.diss(), within(1e-12));
+        for (boolean whiten : new boolean[] {false, true}) {
+            SpanTest.Result a = SpanTest.run(s[0], s[1], FLIPS, 0.05, Progress.NONE, whiten);
+            SpanTest.Result b = SpanTest.run(e2, l2, FLIPS, 0.05, Progress.NONE, whiten);
+            // common practice: a change of unit (µV → mV) and of polarity convention changes
+            // neither p nor the effect size; S is in squared map units (µV² → 10⁻⁶ mV²), and the
+            // whitened variant's S has no unit at all
+            double factor = whiten ? 1 : 1e-6;
+            assertThat(b.p()).isEqualTo(a.p());
+            assertThat(b.statistic()).isCloseTo(factor * a.statistic(), within(1e-9 * factor * a.statistic()));
+            assertThat(b.diss()).isCloseTo(a.diss(), within(1e-12));
+        }
     }
 
     @Test
-    void anyInvertibleMixingOfTheTwoPartsGivesTheSameTest() {
+    void swappingThePartsGivesTheSameTest() {
         double[][][] s = twoMapStudy(15, 12, 24, new double[] {1, 0.4}, new double[] {0.3, 1}, 1.5);
         SpanTest.Result a = SpanTest.run(s[0], s[1], FLIPS, 0.05, Progress.NONE);
+        SpanTest.Result b = SpanTest.run(s[1], s[0], FLIPS, 0.05, Progress.NONE);
+        // algebraic identity: [ȳ x̄] has the singular values of [x̄ ȳ], so S = σ₂² is the same,
+        // and every d_i only changes sign, which the sign-flip null ignores
+        assertThat(b.statistic()).isCloseTo(a.statistic(), within(1e-9 * a.statistic()));
+        assertThat(b.p()).isEqualTo(a.p());
+    }
+
+    @Test
+    void anyInvertibleMixingOfTheTwoPartsGivesTheSameWhitenedTest() {
+        double[][][] s = twoMapStudy(15, 12, 24, new double[] {1, 0.4}, new double[] {0.3, 1}, 1.5);
+        SpanTest.Result a = SpanTest.run(s[0], s[1], FLIPS, 0.05, Progress.NONE, true);
+        assertThat(a.whitened()).isTrue();
         double[][] mixes = {{2, 0.5, -1, 3}, {0, 1, 1, 0}, {1, 1, 1, -1}, {-4, 0, 0, 0.01}};
         for (double[] m : mixes) {
             double[][] x = new double[12][24];
@@ -139,7 +190,7 @@ class SpanTestTest {
                     y[i][c] = m[1] * s[0][i][c] + m[3] * s[1][i][c];
                 }
             }
-            SpanTest.Result b = SpanTest.run(x, y, FLIPS, 0.05, Progress.NONE);
+            SpanTest.Result b = SpanTest.run(x, y, FLIPS, 0.05, Progress.NONE, true);
             // PairWhitening: [x y]A(AᵀTA)^(−1/2) = [x y]T^(−1/2)R with R orthogonal (polar
             // decomposition, a textbook identity), and S = σ₂² is unchanged by R
             assertThat(b.statistic()).as("mix %s", java.util.Arrays.toString(m))
@@ -187,8 +238,12 @@ class SpanTestTest {
         for (int c = 0; c < 30; c++) {
             ss += (x[c] - y[c]) * (x[c] - y[c]);
         }
-        // DESIGN §7 definition: DISS = sqrt(mean((x̂ − ŷ)²)) of the normalised grand means
+        // Lehmann & Skrandies (1980): DISS = sqrt(mean((x̂ − ŷ)²)) of the GFP-normalised maps
         assertThat(r.grandMeanDiss()).isCloseTo(Math.sqrt(ss / 30), within(1e-9));
+        // algebraic identity DISS = sqrt(2(1 − r)), Pearson r from Commons Math
+        double pearson = new org.apache.commons.math3.stat.correlation.PearsonsCorrelation()
+                .correlation(r.earlyMean(), r.lateMean());
+        assertThat(r.grandMeanDiss()).isCloseTo(Math.sqrt(2 * (1 - pearson)), within(1e-9));
     }
 
     @Test

@@ -9,7 +9,8 @@ import org.junit.jupiter.api.Test;
  * A small version of the span test's validation by simulation (the full table comes from
  * {@code SpanValidationRun}, see the README). 40 studies per case, 999 random sign patterns per
  * test: loose bounds that a valid test passes and that the broken variants, the swap of
- * normalised maps and a data-chosen split, fail on the same studies.
+ * normalised maps and a data-chosen split, fail on the same studies. {@code span()} is the
+ * test of DESIGN §7, the command's default.
  */
 class SpanValidationTest {
     private static final int STUDIES = 40;
@@ -24,10 +25,11 @@ class SpanValidationTest {
         // Binomial(40, 0.05) (textbook): a valid level-0.05 test exceeds 6 rejections of 40 with
         // probability ≈ 0.003
         assertThat(t.span()).isLessThanOrEqualTo(MAX_FALSE_ALARMS);
+        assertThat(t.whitened()).isLessThanOrEqualTo(MAX_FALSE_ALARMS);
         // the bound has teeth: the swap test (DESIGN §7) and a split chosen from the data both
         // break it on the same studies
         assertThat(t.swap()).isGreaterThan(MAX_FALSE_ALARMS);
-        assertThat(t.dataChosenSplit()).isGreaterThan(MAX_FALSE_ALARMS);
+        assertThat(t.whitenedDataChosenSplit()).isGreaterThan(MAX_FALSE_ALARMS);
     }
 
     @Test
