@@ -69,6 +69,8 @@ final class SpanPanel extends JPanel {
         count.addChangeListener(e -> recompute());
         header.add(row, BorderLayout.CENTER);
         JPanel test = new JPanel(new FlowLayout(FlowLayout.RIGHT, 4, 2));
+        // a clear gap between the scope text and the controls, however narrow the view
+        test.setBorder(BorderFactory.createEmptyBorder(0, 14, 0, 0));
         test.add(new JLabel("Maps:"));
         test.add(count);
         patterns.setName("span.patterns");
