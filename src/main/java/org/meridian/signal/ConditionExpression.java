@@ -67,6 +67,13 @@ public final class ConditionExpression implements ConditionWave {
      */
     public static ConditionExpression parse(String text, List<String> conditionNames) {
         Objects.requireNonNull(text);
+        // a whole expression that is exactly one condition's name is that condition, even when
+        // the name holds an operator (a file named "dip-10-20" gives a condition of that name)
+        for (String name : conditionNames) {
+            if (name.equals(text.strip()) && !name.isEmpty()) {
+                return condition(name);
+            }
+        }
         Map<String, Double> coefficients = ExpressionParser.parse(text, conditionNames);
         List<Term> terms = new ArrayList<>();
         coefficients.forEach((c, v) -> terms.add(new Term(v, c)));

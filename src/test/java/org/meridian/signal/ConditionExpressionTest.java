@@ -56,6 +56,17 @@ class ConditionExpressionTest {
     }
 
     @Test
+    void aWholeExpressionThatIsOneConditionsNameIsThatCondition() {
+        // common practice: a single file's condition is named after the file, dashes and all
+        List<String> names = List.of("dip-10-20", "dip");
+        assertThat(ConditionExpression.parse(" dip-10-20 ", names).terms())
+                .containsExactly(new ConditionExpression.Term(1, "dip-10-20"));
+        // anything else is still read as an expression
+        assertThat(ConditionExpression.parse("'dip-10-20' - dip", names).terms()).containsExactly(
+                new ConditionExpression.Term(1, "dip-10-20"), new ConditionExpression.Term(-1, "dip"));
+    }
+
+    @Test
     void theNameIsTheTextAsWrittenAndTheCanonicalFormIsTidy() {
         ConditionExpression e = parse("  0.5*rare+0.5*common-'go left' ");
         assertThat(e.name()).isEqualTo("0.5*rare+0.5*common-'go left'");
