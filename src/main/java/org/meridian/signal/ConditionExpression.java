@@ -70,7 +70,7 @@ public final class ConditionExpression implements ConditionWave {
         // a whole expression that is exactly one condition's name is that condition, even when
         // the name holds an operator (a file named "dip-10-20" gives a condition of that name)
         for (String name : conditionNames) {
-            if (name.equals(text.strip()) && !name.isEmpty()) {
+            if (name.equalsIgnoreCase(text.strip()) && !name.isEmpty()) {
                 return condition(name);
             }
         }
