@@ -28,12 +28,21 @@ public final class Contours {
 
     /** Lines at every multiple of {@code step} strictly inside the map's value range. */
     public static List<Line> atSteps(ScalpMap map, double step) {
+        return atSteps(map, step, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * The contours at multiples of {@code step} that lie within [lower, upper] (the colour
+     * limits): where the colours saturate beyond a fixed limit, lines would only crowd the
+     * saturated area without telling values apart on the colour bar.
+     */
+    public static List<Line> atSteps(ScalpMap map, double step, double lower, double upper) {
         List<Line> out = new ArrayList<>();
         if (Float.isInfinite(map.minimum()) || !(step > 0)) {
             return out;
         }
-        long k0 = (long) Math.floor(map.minimum() / step) + 1;
-        long k1 = (long) Math.ceil(map.maximum() / step) - 1;
+        long k0 = (long) Math.floor(Math.max(map.minimum(), lower - step) / step) + 1;
+        long k1 = (long) Math.ceil(Math.min(map.maximum(), upper + step) / step) - 1;
         for (long k = k0; k <= k1; k++) {
             double level = k * step;
             Path2D path = trace(map, level);

@@ -125,7 +125,7 @@ public final class MapRenderer {
             BasicStroke negative = new BasicStroke(thin, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10,
                     new float[] {3 * thin, 2.5f * thin}, 0);
             BasicStroke zero = new BasicStroke((float) (1.3 * line), BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
-            for (Contours.Line c : Contours.atSteps(map, limits.contourStep())) {
+            for (Contours.Line c : Contours.atSteps(map, limits.contourStep(), limits.lower(), limits.upper())) {
                 Shape path = toDevice.createTransformedShape(c.path());
                 if (c.zero()) {
                     g.setColor(ZERO_LINE);

@@ -82,6 +82,16 @@ class MapPartsTest {
     }
 
     @Test
+    void noContoursBeyondFixedColourLimits() {
+        // common practice: lines mark values the colour bar can show; saturated areas get none
+        ScalpMap map = mapOf((x, y) -> 5 * x);
+        assertThat(Contours.atSteps(map, 1, -2, 2)).extracting(Contours.Line::level)
+                .containsExactly(-2.0, -1.0, 0.0, 1.0, 2.0);
+        assertThat(Contours.atSteps(map, 2, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY))
+                .extracting(Contours.Line::level).containsExactly(-4.0, -2.0, 0.0, 2.0, 4.0);
+    }
+
+    @Test
     void automaticLimitsAreSymmetricAndRound() {
         // common practice: symmetric limits about zero, rounded up to 1, 2, 2.5 or 5 × 10^k steps
         assertThat(ColourLimits.automatic(7.3)).isEqualTo(ColourLimits.symmetric(8));
