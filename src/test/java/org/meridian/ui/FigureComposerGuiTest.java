@@ -2,23 +2,17 @@ package org.meridian.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.awt.Dimension;
-import java.awt.Point;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.Robot;
-import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.finder.WindowFinder;
 import org.assertj.swing.fixture.DialogFixture;
 import org.assertj.swing.fixture.FrameFixture;
-import org.assertj.swing.timing.Condition;
-import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -38,49 +32,33 @@ import org.meridian.figure.spec.WaveformPanel;
  * access happens on the event thread; needs a display (see {@link DisplayRequirement}).
  */
 class FigureComposerGuiTest {
-    private static final Timeout WAIT = Timeout.timeout(60_000);
+    private static DemoWindow demo;
     private static Robot robot;
     private static FrameFixture window;
     private static MainWindow frame;
 
     @BeforeAll
     static void openTheDemo() {
-        DisplayRequirement.check();
-        FailOnThreadViolationRepaintManager.install();
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        frame = GuiActionRunner.execute(() -> {
-            Theme.LIGHT.install();
-            return new MainWindow(UiPrefs.inMemory());
-        });
-        window = new FrameFixture(robot, frame);
-        window.show(new Dimension(1400, 900));
-        window.moveTo(new Point(0, 0));
-        GuiActionRunner.execute(() -> frame.openDemo(new ViewOptions(OptionalDouble.of(280),
-                OptionalDouble.of(400), OptionalDouble.of(340), "Pz", List.of(), "")));
-        waitFor("the demo study to open", () -> frame.workbench().model().session() != null
-                && !frame.workbench().tasks().isRunning("open"));
+        demo = DemoWindow.open(new ViewOptions(OptionalDouble.of(280),
+                OptionalDouble.of(400), OptionalDouble.of(340), "Pz", List.of(), ""), Timeout.timeout(60_000));
+        robot = demo.robot;
+        window = demo.window;
+        frame = demo.frame;
         waitFor("the averages", () -> !frame.workbench().model().averages().isEmpty()
                 && !frame.workbench().tasks().isRunning("averages"));
     }
 
     @AfterAll
     static void close() {
-        if (window != null) {
-            window.cleanUp();
-        }
+        DemoWindow.close(demo);
     }
 
     private static <T> T read(Supplier<T> s) {
-        return GuiActionRunner.execute(s::get);
+        return demo.read(s);
     }
 
     private static void waitFor(String what, Supplier<Boolean> c) {
-        Pause.pause(new Condition(what) {
-            @Override
-            public boolean test() {
-                return GuiActionRunner.execute(c::get);
-            }
-        }, WAIT);
+        demo.waitFor(what, c);
     }
 
     @Test

@@ -2,20 +2,15 @@ package org.meridian.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.awt.Dimension;
 import java.awt.Point;
 import java.awt.event.KeyEvent;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.function.Supplier;
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.MouseButton;
 import org.assertj.swing.core.Robot;
-import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.fixture.FrameFixture;
-import org.assertj.swing.timing.Condition;
-import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -35,34 +30,23 @@ import org.meridian.sim.Simulator;
  */
 @TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class MainWindowGuiTest {
-    private static final Timeout WAIT = Timeout.timeout(30_000);
+    private static DemoWindow demo;
     private static Robot robot;
     private static FrameFixture window;
     private static MainWindow frame;
 
     @BeforeAll
     static void openTheDemo() {
-        DisplayRequirement.check();
-        FailOnThreadViolationRepaintManager.install();
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        frame = GuiActionRunner.execute(() -> {
-            Theme.LIGHT.install();
-            return new MainWindow(UiPrefs.inMemory());
-        });
-        window = new FrameFixture(robot, frame);
-        window.show(new Dimension(1400, 900));
-        window.moveTo(new Point(0, 0));
-        GuiActionRunner.execute(() -> frame.openDemo(new ViewOptions(OptionalDouble.of(260),
-                OptionalDouble.of(460), OptionalDouble.of(360), "Pz", List.of(), "")));
-        waitFor("the demo study to open", () -> frame.workbench().model().session() != null
-                && !frame.workbench().tasks().isRunning("open"));
+        demo = DemoWindow.open(new ViewOptions(OptionalDouble.of(260),
+                OptionalDouble.of(460), OptionalDouble.of(360), "Pz", List.of(), ""), Timeout.timeout(30_000));
+        robot = demo.robot;
+        window = demo.window;
+        frame = demo.frame;
     }
 
     @AfterAll
     static void close() {
-        if (window != null) {
-            window.cleanUp();
-        }
+        DemoWindow.close(demo);
     }
 
     @BeforeEach
@@ -223,7 +207,7 @@ class MainWindowGuiTest {
     }
 
     private static ViewState state() {
-        return frame.workbench().state();
+        return demo.state();
     }
 
     private static String atCursor(String participant, String condition) {
@@ -237,23 +221,14 @@ class MainWindowGuiTest {
     }
 
     private static <T> T read(Supplier<T> s) {
-        return GuiActionRunner.execute(s::get);
+        return demo.read(s);
     }
 
     private static void waitFor(String what, Supplier<Boolean> c) {
-        Pause.pause(new Condition(what) {
-            @Override
-            public boolean test() {
-                return GuiActionRunner.execute(c::get);
-            }
-        }, WAIT);
+        demo.waitFor(what, c);
     }
 
-    /** Waits until no background task runs. */
     private static void settle() {
-        waitFor("background work to finish", () -> frame.workbench().tasks().shown() == null
-                && !frame.workbench().tasks().isRunning("averages") && !frame.workbench().tasks().isRunning("measures")
-                && !frame.workbench().tasks().isRunning("span"));
-        robot.waitForIdle();
+        demo.settle();
     }
 }

@@ -2,7 +2,6 @@ package org.meridian.ui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.awt.Dimension;
 import java.awt.Point;
 import java.awt.geom.Rectangle2D;
 import java.util.List;
@@ -12,16 +11,12 @@ import javax.swing.JLabel;
 import javax.swing.JTable;
 import javax.swing.RowSorter;
 import javax.swing.SortOrder;
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.MouseButton;
 import org.assertj.swing.core.Robot;
-import org.assertj.swing.edt.FailOnThreadViolationRepaintManager;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.finder.WindowFinder;
 import org.assertj.swing.fixture.DialogFixture;
 import org.assertj.swing.fixture.FrameFixture;
-import org.assertj.swing.timing.Condition;
-import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.ui.RectangleEdge;
@@ -37,34 +32,23 @@ import org.meridian.maps.ColourLimits;
  * band in the scalp layout, and the processing of the averages. Runs with AssertJ Swing's event-thread check; needs a display.
  */
 class WindowDetailsGuiTest {
-    private static final Timeout WAIT = Timeout.timeout(30_000);
+    private static DemoWindow demo;
     private static Robot robot;
     private static FrameFixture window;
     private static MainWindow frame;
 
     @BeforeAll
     static void openTheDemo() {
-        DisplayRequirement.check();
-        FailOnThreadViolationRepaintManager.install();
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        frame = GuiActionRunner.execute(() -> {
-            Theme.LIGHT.install();
-            return new MainWindow(UiPrefs.inMemory());
-        });
-        window = new FrameFixture(robot, frame);
-        window.show(new Dimension(1400, 900));
-        window.moveTo(new Point(0, 0));
-        GuiActionRunner.execute(() -> frame.openDemo(new ViewOptions(OptionalDouble.of(260),
-                OptionalDouble.of(460), OptionalDouble.of(360), "Pz", List.of(), "")));
-        waitFor("the demo study to open", () -> frame.workbench().model().session() != null
-                && !frame.workbench().tasks().isRunning("open"));
+        demo = DemoWindow.open(new ViewOptions(OptionalDouble.of(260),
+                OptionalDouble.of(460), OptionalDouble.of(360), "Pz", List.of(), ""), Timeout.timeout(30_000));
+        robot = demo.robot;
+        window = demo.window;
+        frame = demo.frame;
     }
 
     @AfterAll
     static void close() {
-        if (window != null) {
-            window.cleanUp();
-        }
+        DemoWindow.close(demo);
     }
 
     @BeforeEach
@@ -253,26 +237,18 @@ class WindowDetailsGuiTest {
     }
 
     private static ViewState state() {
-        return frame.workbench().state();
+        return demo.state();
     }
 
     private static <T> T read(Supplier<T> s) {
-        return GuiActionRunner.execute(s::get);
+        return demo.read(s);
     }
 
     private static void waitFor(String what, Supplier<Boolean> c) {
-        Pause.pause(new Condition(what) {
-            @Override
-            public boolean test() {
-                return GuiActionRunner.execute(c::get);
-            }
-        }, WAIT);
+        demo.waitFor(what, c);
     }
 
     private static void settle() {
-        waitFor("background work to finish", () -> frame.workbench().tasks().shown() == null
-                && !frame.workbench().tasks().isRunning("averages") && !frame.workbench().tasks().isRunning("measures")
-                && !frame.workbench().tasks().isRunning("span"));
-        robot.waitForIdle();
+        demo.settle();
     }
 }
