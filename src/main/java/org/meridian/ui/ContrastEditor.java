@@ -10,8 +10,6 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JTextField;
 import javax.swing.UIManager;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import javax.swing.text.BadLocationException;
 import javax.swing.text.DefaultHighlighter;
 import org.meridian.core.BadInputException;
@@ -55,22 +53,7 @@ final class ContrastEditor extends JPanel {
         add(add, BorderLayout.EAST);
         add(error, BorderLayout.SOUTH);
         setBorder(BorderFactory.createEmptyBorder(2, 0, 2, 0));
-        field.getDocument().addDocumentListener(new DocumentListener() {
-            @Override
-            public void insertUpdate(DocumentEvent e) {
-                check();
-            }
-
-            @Override
-            public void removeUpdate(DocumentEvent e) {
-                check();
-            }
-
-            @Override
-            public void changedUpdate(DocumentEvent e) {
-                check();
-            }
-        });
+        TextEdits.onEveryEdit(field, this::check);
         field.addActionListener(e -> commit());
         add.addActionListener(e -> commit());
         add.setEnabled(false);

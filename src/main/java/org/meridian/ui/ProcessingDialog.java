@@ -17,8 +17,6 @@ import javax.swing.JSpinner;
 import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
 import javax.swing.UIManager;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import javax.swing.text.JTextComponent;
 import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
@@ -118,22 +116,7 @@ final class ProcessingDialog extends JDialog {
         for (JTextComponent t : new JTextComponent[] {restore, highPass, lowPass,
                 (JTextComponent) reference.getEditor().getEditorComponent(),
                 (JTextComponent) baseline.getEditor().getEditorComponent()}) {
-            t.getDocument().addDocumentListener(new DocumentListener() {
-                @Override
-                public void insertUpdate(DocumentEvent e) {
-                    check();
-                }
-
-                @Override
-                public void removeUpdate(DocumentEvent e) {
-                    check();
-                }
-
-                @Override
-                public void changedUpdate(DocumentEvent e) {
-                    check();
-                }
-            });
+            TextEdits.onEveryEdit(t, this::check);
         }
         reference.addActionListener(e -> check());
         baseline.addActionListener(e -> check());
