@@ -1,9 +1,7 @@
 package org.meridian.cli;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.meridian.core.BadInputException;
 import org.meridian.core.Study;
 import org.meridian.io.AtomicFiles;
 import org.meridian.io.OutputGuard;
@@ -110,8 +108,6 @@ final class SpanCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        refuseToOverwrite(output, "-o");
-        refuseToOverwrite(matrix, "--matrix");
         TimeWindow w = OptionErrors.about("--window", () -> TimeWindow.parse(window));
         SpanSettings settings = OptionErrors.about("--window", () -> SpanSettings.window(w))
                 .withCsd(csd).withSpline(spline.parameters())
@@ -140,19 +136,5 @@ final class SpanCommand implements Callable<Integer> {
             spec.commandLine().getOut().print(SpanReportText.summaryLines(report, ""));
         }
         return Main.EXIT_OK;
-    }
-
-    /** An export must never replace the study it reads. */
-    private void refuseToOverwrite(Path target, String option) {
-        if (target != null && Files.exists(target) && Files.exists(study)) {
-            try {
-                if (Files.isSameFile(target, study)) {
-                    throw new BadInputException("option " + option + ": " + target
-                            + " is the study being read; choose another file");
-                }
-            } catch (java.io.IOException e) {
-                throw new BadInputException("option " + option + ": cannot check " + target + ": " + e.getMessage(), e);
-            }
-        }
     }
 }

@@ -27,6 +27,9 @@ public final class OutputGuard {
     /**
      * Refuses an output file that is one of the study's input files. Does nothing when
      * {@code output} is null (the option was not given).
+     *
+     * @param option the command-line option at fault ({@code -o}), or, for the window, words
+     *               naming the output (the message then starts with those words)
      */
     public static void requireNotInput(Study study, String option, Path output) {
         requireNotInput(study, option, output, null, null);
@@ -43,12 +46,12 @@ public final class OutputGuard {
         }
         Path out = located(output);
         if (otherInput != null && (out.equals(located(otherInput)) || sameFile(output, otherInput))) {
-            throw new BadInputException("option " + option + ": " + output + " is "
+            throw new BadInputException(at(option) + output + " is "
                     + otherDescription + " being read; write the output to another file");
         }
         for (InputFile in : study.inputFiles()) {
             if (out.equals(in.path()) || sameFile(output, in.path())) {
-                throw new BadInputException("option " + option + ": " + output
+                throw new BadInputException(at(option) + output
                         + " is an input file of the study (" + in.role().description() + " "
                         + in.path() + "); write the output to another file");
             }
@@ -65,14 +68,14 @@ public final class OutputGuard {
         Path out = located(outputFolder);
         for (InputFile in : study.inputFiles()) {
             if (in.path().startsWith(out)) {
-                throw new BadInputException("option " + option + ": " + outputFolder
+                throw new BadInputException(at(option) + outputFolder
                         + " holds an input file of the study (" + in.role().description() + " "
                         + in.path() + "); write the result to another folder");
             }
         }
         for (Path folder : studyFolders(study)) {
             if (out.startsWith(folder)) {
-                throw new BadInputException("option " + option + ": " + outputFolder
+                throw new BadInputException(at(option) + outputFolder
                         + " lies inside the folder of the input study (" + folder
                         + "); write the result to another folder");
             }
@@ -120,5 +123,10 @@ public final class OutputGuard {
         } catch (IOException e) {
             return false;
         }
+    }
+
+    /** The start of an error: {@code option -o: } for an option, the words as given otherwise. */
+    private static String at(String option) {
+        return option.startsWith("-") ? "option " + option + ": " : option + ": ";
     }
 }

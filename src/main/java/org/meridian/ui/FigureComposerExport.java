@@ -6,6 +6,7 @@ import org.meridian.figure.FigureDrawing;
 import org.meridian.figure.Figures;
 import org.meridian.figure.spec.FigureSpec;
 import org.meridian.figure.spec.SpecFiles;
+import org.meridian.io.OutputGuard;
 import org.meridian.io.StudyLoader;
 import org.meridian.io.StudyWriter;
 
@@ -51,6 +52,8 @@ final class FigureComposerExport {
             Tasks.TaskProgress progress) {
         Path target = figure.toAbsolutePath();
         Path specFile = specBeside(target);
+        OutputGuard.requireNotInput(data, "the figure", target);
+        OutputGuard.requireNotInput(data, "the figure's spec", specFile);
         Path studyPath = studyOnDisk;
         Study drawn = data;
         Path written = null;

@@ -24,6 +24,7 @@ import org.meridian.core.Study;
 import org.meridian.core.Unit;
 import org.meridian.core.Waveforms;
 import org.meridian.io.AtomicFiles;
+import org.meridian.io.OutputGuard;
 import org.meridian.measure.Measure;
 import org.meridian.measure.MeasureRequest;
 import org.meridian.measure.MeasureSettings;
@@ -410,7 +411,11 @@ final class MeasuresPanel extends JPanel {
 
     /** Writes the tidy table to a file through {@link AtomicFiles}, off the event thread. */
     void export(Path target, MeasureTable t) {
+        Study study = bench.model().study();
         bench.tasks().submit("export", "Exporting measures", p -> {
+            if (study != null) {
+                OutputGuard.requireNotInput(study, "the measure table", target);
+            }
             AtomicFiles.writeString(target, t.toTsv());
             return target;
         }, done -> bench.message("wrote " + t.rows().size() + " measures to " + done), bench::report);

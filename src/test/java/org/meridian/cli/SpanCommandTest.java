@@ -91,7 +91,7 @@ class SpanCommandTest {
         CliRun overwrite = CliRun.of("span", file.toString(), "--condition", "x", "--window", "0:4",
                 "-o", file.toString());
         assertThat(overwrite.exitCode()).isEqualTo(Main.EXIT_BAD_INPUT);
-        assertThat(overwrite.err()).contains("is the study being read");
+        assertThat(overwrite.err()).contains("option -o: ").contains("is an input file of the study");
         assertThat(Files.readString(file)).startsWith("time_ms\tCz");
     }
 }

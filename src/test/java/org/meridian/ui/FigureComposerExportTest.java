@@ -59,6 +59,26 @@ class FigureComposerExportTest {
     }
 
     @Test
+    void theFigureNeverLandsOnAFileTheStudyWasReadFrom(@TempDir Path dir) throws Exception {
+        // common practice (and the project's rule): an export never replaces an input file
+        Path folder = dir.resolve("copy");
+        Files.createDirectories(folder);
+        try (var files = Files.list(Path.of("samples", "two-tone-listening"))) {
+            for (Path f : (Iterable<Path>) files::iterator) {
+                Files.copy(f, folder.resolve(f.getFileName().toString()));
+            }
+        }
+        Study read = StudyLoader.load(folder);
+        Path manifest = folder.resolve("study.tsv");
+        byte[] before = Files.readAllBytes(manifest);
+        assertThatThrownBy(() -> FigureComposerExport.run(spec(), read, folder, manifest, 300, QUIET))
+                .isInstanceOf(BadInputException.class)
+                .hasMessageStartingWith("the figure: ")
+                .hasMessageContaining("is an input file of the study");
+        assertThat(Files.readAllBytes(manifest)).isEqualTo(before);
+    }
+
+    @Test
     void aStudyInMemoryIsSavedBesideTheFigureAndTheSpecRefersToIt(@TempDir Path dir) throws Exception {
         Path svg = dir.resolve("late peak.svg");
         FigureComposerExport.Result r = FigureComposerExport.run(spec(), simulated, null, svg, 300, QUIET);
