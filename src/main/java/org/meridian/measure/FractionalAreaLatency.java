@@ -40,14 +40,35 @@ final class FractionalAreaLatency implements Measure {
         }
         double direction = Math.signum(total);
         double target = settings.fraction() * total * direction;
+        if (polarity != Polarity.SIGNED) {
+            // the running area of one part never falls, so the search may skip the stretches that
+            // end below the target; rounding can leave it short, and then the whole walk decides
+            int start = t.areaSearchStart(polarity, direction, target);
+            if (start > t.from()) {
+                double found = search(t, polarity, direction, target, start,
+                        direction * t.areaTo(start, polarity), false);
+                if (!Double.isNaN(found)) {
+                    return Score.of(found);
+                }
+            }
+        }
+        return Score.of(search(t, polarity, direction, target, t.from(), 0, true));
+    }
+
+    /**
+     * The time at which direction × the running area, {@code running} at sample {@code start},
+     * first reaches {@code target}; when it never does, the time at which it first reached its
+     * largest value if {@code fallBack}, NaN otherwise.
+     */
+    private static double search(Trace t, Polarity polarity, double direction, double target,
+            int start, double running, boolean fallBack) {
         double[] x = t.values();
         double dt = t.stepMs();
-        double running = 0;
         // where the running area first reached its largest value: the answer when rounding
         // leaves every step a hair short of the target (f near 1, the total summed otherwise)
         double highest = 0;
         double highestAt = t.timeMs(t.to());
-        for (int i = t.from(); i < t.to(); i++) {
+        for (int i = start; i < t.to(); i++) {
             double a = x[i];
             double b = x[i + 1];
             double piece = polarity == Polarity.SIGNED ? SegmentArea.signed(a, b, dt)
@@ -56,7 +77,7 @@ final class FractionalAreaLatency implements Measure {
             double next = running + direction * piece;
             if (next >= target) {
                 double share = next == running ? 0 : (target - running) / (next - running);
-                return Score.of(t.timeMs(i) + Math.max(0, share) * dt);
+                return t.timeMs(i) + Math.max(0, share) * dt;
             }
             running = next;
             if (running > highest) {
@@ -64,6 +85,6 @@ final class FractionalAreaLatency implements Measure {
                 highestAt = t.timeMs(i + 1);
             }
         }
-        return Score.of(highestAt);
+        return fallBack ? highestAt : Double.NaN;
     }
 }

@@ -43,16 +43,25 @@ final class SegmentArea {
 
     /**
      * The area of the chosen part over samples from..to of x, from the window's one-pass sums
-     * ({@link WindowScan}). The trapezoid sums are sums over samples with the two end samples
-     * halved (Σ_i (x_i + x_{i+1})/2 = Σ x − (x_from + x_to)/2), and x⁺ = (x + |x|)/2; the
-     * crossings' overshoot is subtracted from the clipped trapezoids.
+     * ({@link WindowScan}); see {@link #fromSums}.
      */
     static double sum(WindowScan scan, double[] x, int from, int to, double dt, Polarity polarity) {
-        double ends = 0.5 * (x[from] + x[to]);
-        double signed = (scan.evenSum + scan.oddSum) - ends;
-        double clipped = 0.5 * ((scan.evenSum + scan.oddSum) + (scan.evenAbs + scan.oddAbs))
-                - 0.5 * (ends + 0.5 * (Math.abs(x[from]) + Math.abs(x[to])));
-        double positive = (clipped - 0.5 * scan.overshoot) * dt;
+        return fromSums(scan.evenSum + scan.oddSum, scan.evenAbs + scan.oddAbs, scan.overshoot,
+                x[from], x[to], dt, polarity);
+    }
+
+    /**
+     * The area of the chosen part over samples from..to from Σ x and Σ |x| over from..to (ends
+     * included) and the crossings' overshoot in between. The trapezoid sums are sums over
+     * samples with the two end samples halved (Σ_i (x_i + x_{i+1})/2 = Σ x − (x_from + x_to)/2),
+     * and x⁺ = (x + |x|)/2; the crossings' overshoot is subtracted from the clipped trapezoids.
+     */
+    static double fromSums(double sum, double absSum, double overshoot, double first, double last,
+            double dt, Polarity polarity) {
+        double ends = 0.5 * (first + last);
+        double signed = sum - ends;
+        double clipped = 0.5 * (sum + absSum) - 0.5 * (ends + 0.5 * (Math.abs(first) + Math.abs(last)));
+        double positive = (clipped - 0.5 * overshoot) * dt;
         return switch (polarity) {
             case SIGNED -> signed * dt;
             case POSITIVE -> positive;

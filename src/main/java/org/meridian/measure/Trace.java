@@ -125,6 +125,31 @@ public final class Trace {
         return SegmentArea.sum(scan(), values, from, to, stepMs(), polarity);
     }
 
+    /**
+     * Where a search along the running area of the chosen part may start: the last of the
+     * scan's marks (every {@value WindowScan#BLOCK} samples) before the first one at which
+     * direction × the running area reaches {@code target}, so that between the window's start
+     * and that mark the running area stays below the target (up to rounding). The window's
+     * start when the first stretch already reaches it.
+     */
+    int areaSearchStart(Polarity polarity, double direction, double target) {
+        WindowScan s = scan();
+        int start = from;
+        for (int m = 1; m < s.marks(); m++) {
+            if (direction * s.areaToMark(m, values, stepMs(), polarity) >= target) {
+                break;
+            }
+            start = s.mark(m);
+        }
+        return start;
+    }
+
+    /** The running area of the chosen part from the window's start to a mark or the window's start. */
+    double areaTo(int mark, Polarity polarity) {
+        WindowScan s = scan();
+        return mark == from ? 0 : s.areaToMark((mark - from) / WindowScan.BLOCK, values, stepMs(), polarity);
+    }
+
     /** The window's shared one-pass results, scanned on first use. */
     private WindowScan scan() {
         if (scan == null) {

@@ -17,8 +17,15 @@ package org.meridian.measure;
  * the rest of the pass. The pass therefore records, without branching, every interval whose ends
  * differ in sign bit (a superset of the crossings: a zero end has a sign bit too), and a second
  * loop over those few tests x_j·x_{j+1} &lt; 0 exactly and adds the overshoot in order of j.
+ *
+ * <p>Marks: every {@value #BLOCK} samples the pass also notes how far its sums (and the
+ * crossings' overshoot) had come, so the running area up to any mark costs a few operations
+ * instead of a walk from the window start ({@link #areaToMark}); the fractional area latency
+ * uses them to skip to the stretch where its search ends.
  */
 final class WindowScan {
+    /** Samples between two marks. */
+    static final int BLOCK = 32;
     /** Candidate crossings, one buffer per thread so scans allocate nothing. */
     private static final ThreadLocal<int[]> CANDIDATES = ThreadLocal.withInitial(() -> new int[0]);
 
@@ -34,9 +41,18 @@ final class WindowScan {
     final int sign;
     /** The first sample with the largest sign·x. */
     final int extremeIndex;
+    /** The window's first sample; mark m is sample from + m·{@value #BLOCK}. */
+    private final int from;
+    /**
+     * For each mark m (0 ≤ m &lt; marks, all inside the window): Σ x and Σ |x| over the samples
+     * before it (from ≤ i &lt; mark), and the overshoot of the crossings before it (j + 1 ≤ mark),
+     * at [3m], [3m + 1] and [3m + 2].
+     */
+    private final double[] markSums;
+    private final int marks;
 
     private WindowScan(double evenSum, double oddSum, double evenAbs, double oddAbs,
-            double overshoot, int sign, int extremeIndex) {
+            double overshoot, int sign, int extremeIndex, int from, double[] markSums, int marks) {
         this.evenSum = evenSum;
         this.oddSum = oddSum;
         this.evenAbs = evenAbs;
@@ -44,6 +60,9 @@ final class WindowScan {
         this.overshoot = overshoot;
         this.sign = sign;
         this.extremeIndex = extremeIndex;
+        this.from = from;
+        this.markSums = markSums;
+        this.marks = marks;
     }
 
     /** @param sign +1 to find the first largest sample, −1 the first smallest */
@@ -59,30 +78,41 @@ final class WindowScan {
         // the first step compares x_from with itself, so the interval before the window never counts
         long prev = Double.doubleToRawLongBits(x[from]);
         int i = from;
-        for (; i + 1 <= to; i += 2) {
-            double a = x[i];
-            double b = x[i + 1];
-            sum0 += a;
-            sum1 += b;
-            abs0 += Math.abs(a);
-            abs1 += Math.abs(b);
-            // strict comparisons keep the first of equal extremes; a before b for the same reason
-            if (sign * a > bestValue) {
-                bestValue = sign * a;
-                best = i;
+        int marks = 0;
+        double[] markSums = new double[3 * ((to - from + 1) / BLOCK)];
+        // block by block, noting the sums at the start of every whole block; the additions are
+        // the same, in the same order, as in one loop over the window
+        while (i + 1 <= to) {
+            if (i + BLOCK - 1 <= to) {
+                markSums[3 * marks] = sum0 + sum1;
+                markSums[3 * marks + 1] = abs0 + abs1;
+                marks++;
             }
-            if (sign * b > bestValue) {
-                bestValue = sign * b;
-                best = i + 1;
+            for (int end = Math.min(i + BLOCK, to); i < end; i += 2) {
+                double a = x[i];
+                double b = x[i + 1];
+                sum0 += a;
+                sum1 += b;
+                abs0 += Math.abs(a);
+                abs1 += Math.abs(b);
+                // strict comparisons keep the first of equal extremes; a before b for the same reason
+                if (sign * a > bestValue) {
+                    bestValue = sign * a;
+                    best = i;
+                }
+                if (sign * b > bestValue) {
+                    bestValue = sign * b;
+                    best = i + 1;
+                }
+                long aBits = Double.doubleToRawLongBits(a);
+                long bBits = Double.doubleToRawLongBits(b);
+                // always write, advance only when the sign bits differ: no branch
+                candidates[count] = i - 1;
+                count += (int) ((prev ^ aBits) >>> 63);
+                candidates[count] = i;
+                count += (int) ((aBits ^ bBits) >>> 63);
+                prev = bBits;
             }
-            long aBits = Double.doubleToRawLongBits(a);
-            long bBits = Double.doubleToRawLongBits(b);
-            // always write, advance only when the sign bits differ: no branch
-            candidates[count] = i - 1;
-            count += (int) ((prev ^ aBits) >>> 63);
-            candidates[count] = i;
-            count += (int) ((aBits ^ bBits) >>> 63);
-            prev = bBits;
         }
         if (i == to) {
             double a = x[i];
@@ -95,14 +125,42 @@ final class WindowScan {
             count += (int) ((prev ^ Double.doubleToRawLongBits(a)) >>> 63);
         }
         double overshoot = 0;
+        // mark 0 has no crossing before it; mark m counts the crossings with j < from + m·BLOCK
+        int m = 1;
         for (int c = 0; c < count; c++) {
             int j = candidates[c];
+            while (m < marks && from + m * BLOCK <= j) {
+                markSums[3 * m++ + 2] = overshoot;
+            }
             double ab = x[j] * x[j + 1];
             if (ab < 0) {
                 overshoot -= ab / Math.abs(x[j] - x[j + 1]);
             }
         }
-        return new WindowScan(sum0, sum1, abs0, abs1, overshoot, sign, best);
+        while (m < marks) {
+            markSums[3 * m++ + 2] = overshoot;
+        }
+        return new WindowScan(sum0, sum1, abs0, abs1, overshoot, sign, best, from, markSums, marks);
+    }
+
+    /** The number of marks, all inside the window (none when it is shorter than a block). */
+    int marks() {
+        return marks;
+    }
+
+    /** The sample index of mark m. */
+    int mark(int m) {
+        return from + m * BLOCK;
+    }
+
+    /**
+     * The area of the chosen part over the window's start .. mark m (see
+     * {@link SegmentArea#fromSums}); 0 at mark 0.
+     */
+    double areaToMark(int m, double[] x, double dt, Polarity polarity) {
+        int b = mark(m);
+        return SegmentArea.fromSums(markSums[3 * m] + x[b], markSums[3 * m + 1] + Math.abs(x[b]),
+                markSums[3 * m + 2], x[from], x[b], dt, polarity);
     }
 
     private static int[] candidates(int length) {

@@ -65,6 +65,27 @@ class MeasuresTest {
     }
 
     @Test
+    void aLobeFollowedByALongNegativeStretchKeepsItsAreaLatencies() {
+        // a triangle from 0 ms up to 2 µV at 100 ms and down to 0 at 200 ms, then −1 µV to the
+        // window's end 1.4 s later: the positive part's running area is flat over many of the
+        // scan's blocks, so the search skips stretches; geometry gives the answers
+        TimeAxis axis = new TimeAxis(-100, 1000, 1800);
+        Trace t = trace(axis, ms -> ms <= 200 ? corners(0, 0, 100, 2, 200, 0).applyAsDouble(ms)
+                : ms < 210 ? -(ms - 200) / 10 : -1, "-50:1650");
+        // symmetric triangle: half the area at its apex (geometry)
+        assertThat(score("frac-area-latency", t, POS)).isCloseTo(100, within(1e-9));
+        // the whole positive area is reached where the triangle ends, not where the window ends
+        assertThat(score("frac-area-latency", t, POS.withFraction(1))).isCloseTo(200, within(1e-9));
+        // a quarter of the area: (t/100)²·100/200 = 1/4 → t = 100/√2 ms (geometry); linear
+        // interpolation in the running area is exact to O(Δt²·slope/area): 0.01 ms here
+        assertThat(score("frac-area-latency", t, POS.withFraction(0.25))).isCloseTo(100 / Math.sqrt(2), within(0.01));
+        // the negative part: a ramp over 200..210 ms (area 5) then −1 µV to 1650 ms (area 1440);
+        // half of 1445 µV·ms is reached at 210 + (722.5 − 5) ms (geometry)
+        assertThat(score("frac-area-latency", t, NEG)).isCloseTo(927.5, within(1e-9));
+        assertThat(score("frac-area-latency", t, NEG.withFraction(1))).isCloseTo(1650, within(1e-9));
+    }
+
+    @Test
     void aTrianglesFractionalLatenciesFollowFromItsGeometry() {
         // rises from 0 at 0 ms to 1 µV at 100 ms, falls to 0 at 300 ms; area 150 µV·ms
         TimeAxis axis = new TimeAxis(-50, 1000, 400);
