@@ -9,14 +9,15 @@ package org.meridian.measure;
  *
  * <p>The sums are kept in two halves (samples from, from + 2, … and from + 1, from + 3, …), which
  * halves the chain of dependent additions; the order of every addition is fixed, so results are
- * the same bit for bit on every run and as when each measure had its own loop. The extreme's
+ * the same bit for bit on every run. The extreme's
  * comparisons ride along in the same loop, where the additions' latency leaves room for them.
  *
  * <p>Crossings: a wave near zero crosses it at random, every few samples if it is noisy, so a
  * test and branch at every interval is mispredicted at every crossing, which costs more than
  * the rest of the pass. The pass therefore records, without branching, every interval whose ends
- * differ in sign bit (a superset of the crossings: a zero end has a sign bit too), and a second
- * loop over those few tests x_j·x_{j+1} &lt; 0 exactly and adds the overshoot in order of j.
+ * differ in sign bit (the crossings, and intervals with a zero end, whose overshoot is 0), and a
+ * second loop over those few adds their overshoot, two terms to a division. The overshoot's
+ * additions are ordered too, though not one by one (see {@link #overshoot}).
  *
  * <p>Marks: every {@value #BLOCK} samples the pass also notes how far its sums (and the
  * crossings' overshoot) had come, so the running area up to any mark costs a few operations
@@ -124,23 +125,64 @@ final class WindowScan {
             candidates[count] = i - 1;
             count += (int) ((prev ^ Double.doubleToRawLongBits(a)) >>> 63);
         }
-        double overshoot = 0;
-        // mark 0 has no crossing before it; mark m counts the crossings with j < from + m·BLOCK
-        int m = 1;
-        for (int c = 0; c < count; c++) {
-            int j = candidates[c];
-            while (m < marks && from + m * BLOCK <= j) {
-                markSums[3 * m++ + 2] = overshoot;
-            }
-            double ab = x[j] * x[j + 1];
-            if (ab < 0) {
-                overshoot -= ab / Math.abs(x[j] - x[j + 1]);
-            }
-        }
-        while (m < marks) {
-            markSums[3 * m++ + 2] = overshoot;
-        }
+        double overshoot = overshoots(x, candidates, count, from, marks, markSums);
         return new WindowScan(sum0, sum1, abs0, abs1, overshoot, sign, best, from, markSums, marks);
+    }
+
+    /**
+     * The crossings' overshoot over the whole window, noting at each mark m ≥ 1 the part before
+     * it (intervals j &lt; mark), from the candidate intervals in order of j.
+     */
+    private static double overshoots(double[] x, int[] candidates, int count, int from, int marks,
+            double[] markSums) {
+        double total = 0;
+        int c = 0;
+        // one stretch per mark, the last one running to the window's end
+        for (int m = 1; m <= Math.max(marks, 1); m++) {
+            int end = m < marks ? from + m * BLOCK : Integer.MAX_VALUE;
+            int stop = c;
+            while (stop < count && candidates[stop] < end) {
+                stop++;
+            }
+            total += overshoot(x, candidates, c, stop);
+            c = stop;
+            if (m < marks) {
+                markSums[3 * m + 2] = total;
+            }
+        }
+        return total;
+    }
+
+    /**
+     * Σ −x_j·x_{j+1} / |x_j − x_{j+1}| over candidates[lo..hi). A candidate's ends differ in sign
+     * bit, so x_j·x_{j+1} ≤ 0 and the term is ≥ 0; it is 0 when an end is zero, and skipped when
+     * both are (+0 and −0). Two terms share one division, p/q + r/s = (p·s + r·q)/(q·s): a
+     * division costs several multiplications, and on a noisy wave there is one per few samples.
+     */
+    private static double overshoot(double[] x, int[] candidates, int lo, int hi) {
+        double sum = 0;
+        int c = lo;
+        for (; c + 1 < hi; c += 2) {
+            int j = candidates[c];
+            int k = candidates[c + 1];
+            double p = x[j] * x[j + 1];
+            double q = Math.abs(x[j] - x[j + 1]);
+            double r = x[k] * x[k + 1];
+            double s = Math.abs(x[k] - x[k + 1]);
+            double qs = q * s;
+            // a product too small for full precision (never for data stored as floats) is split
+            sum -= qs >= Double.MIN_NORMAL ? (p * s + r * q) / qs : term(p, q) + term(r, s);
+        }
+        if (c < hi) {
+            int j = candidates[c];
+            sum -= term(x[j] * x[j + 1], Math.abs(x[j] - x[j + 1]));
+        }
+        return sum;
+    }
+
+    /** p / q, or 0 when q is 0 (ends +0 and −0). */
+    private static double term(double p, double q) {
+        return q > 0 ? p / q : 0;
     }
 
     /** The number of marks, all inside the window (none when it is shorter than a block). */
