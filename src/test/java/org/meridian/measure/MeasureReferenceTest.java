@@ -126,6 +126,34 @@ class MeasureReferenceTest {
     }
 
     @Test
+    void theRunningAreaAtEveryMarkAndOfEveryShortWindowIsTheExactIntegral() {
+        Random random = new Random(31);
+        double dt = AXIS.stepMs();
+        for (int trial = 0; trial < 120; trial++) {
+            // whole-number waves have exact zeros of both signs (rint(−0.3) = −0.0)
+            double[] x = wave(random, trial % 2 == 0 ? 3 : 1);
+            double[] negated = new double[x.length];
+            for (int i = 0; i < x.length; i++) {
+                negated[i] = -x[i];
+            }
+            // the data's first sample, and windows of every length up to a few groups of four
+            int from = trial % 3 == 0 ? 0 : random.nextInt(20);
+            int to = trial < 60 ? from + trial % 40 : AXIS.samples() - 1 - random.nextInt(10);
+            Trace t = new Trace(x, AXIS, from, to);
+            assertThat(t.area(Polarity.POSITIVE)).as("trial %d", trial)
+                    .isCloseTo(positiveAreaByDefinition(x, from, to, dt), within(1e-9));
+            assertThat(t.area(Polarity.NEGATIVE)).as("trial %d", trial)
+                    .isCloseTo(-positiveAreaByDefinition(negated, from, to, dt), within(1e-9));
+            for (int mark = from + WindowScan.BLOCK; mark + WindowScan.BLOCK - 1 <= to; mark += WindowScan.BLOCK) {
+                assertThat(t.areaTo(mark, Polarity.POSITIVE)).as("trial %d, mark %d", trial, mark)
+                        .isCloseTo(positiveAreaByDefinition(x, from, mark, dt), within(1e-9));
+                assertThat(t.areaTo(mark, Polarity.NEGATIVE)).as("trial %d, mark %d", trial, mark)
+                        .isCloseTo(-positiveAreaByDefinition(negated, from, mark, dt), within(1e-9));
+            }
+        }
+    }
+
+    @Test
     void theSharedScansFindWhatTheDefinitionsFind() {
         Random random = new Random(23);
         for (int trial = 0; trial < 400; trial++) {
