@@ -47,6 +47,8 @@ final class NumberRows {
     private int labelEnd;
     /** How many cells the last {@link #pointCells} call read. */
     private int cellsDone;
+    /** The number of decimals {@link #pointCells} expects: that of the last cell it read. */
+    private int decimals = 1;
 
     /** The result of scanning one number: where it ended, its significand and power of ten. */
     static final class Cursor {
@@ -142,46 +144,66 @@ final class NumberRows {
 
     /**
      * The bulk of a row read without unit conversion: from the delimiter at {@code i}, up to
-     * {@code max} cells of the commonest form, [-]digits.[digits] in at most eight bytes and
+     * {@code max} cells of the commonest form, [-]digits.digits in at most eight bytes and
      * followed by the delimiter, stored as floats in {@code dest[o + k · stride]}. Stops at the
      * first cell of any other form (and near the end of the buffer), leaving it to the careful
      * path. Returns the index of the delimiter after the last cell read and sets
      * {@link #cellsDone}.
      *
-     * <p>Written for few operations and no data-dependent branch, as it runs once per value:
-     * the cell's end is where its word first holds a byte outside '-' … '9'
-     * ({@link EightDigits#numberBytes}); the point is found by a byte-equality test and its gap
-     * closed; a leading minus becomes a leading zero digit (0x2D + 3 = '0') and sets the sign bit
-     * at the end. Of the bytes then left, the digits are exactly those with bit 4 set (the other
-     * bytes of the range, minus, point and slash, lack it), so one mask test checks them all. At
-     * most 7 digits remain, m < 2^24, and m / 10^k with k ≤ 6 is one correctly rounded division
-     * of exact operands (Clinger, 1990), hence the float nearest the decimal.
+     * <p>Written for few operations per value, and without a branch that depends on the data of
+     * an ordinary file. The cell's end is where its word first holds a byte outside '-' … '9'
+     * ({@link EightDigits#numberBytes}); the word is shifted so that the cell's last byte is its
+     * top byte. Files write every value with the same number of decimals f, so the point is
+     * expected f bytes below the top (f is taken from the first cell that disagrees and kept),
+     * and closing its gap takes masks that stay the same from cell to cell. Of the bytes then
+     * left below the top, the digits are exactly those with bit 4 set (the other bytes of the
+     * range, minus, point and slash, lack it), so one mask test checks them all, the sign byte
+     * excepted; masking the sign byte away leaves the significand's digits with zeros below. At
+     * most 7 digits remain, m < 2^24, and m / 10^f with f ≤ 6 is one correctly rounded division
+     * of exact operands (Clinger, 1990), hence the float nearest the decimal. The sign is set on
+     * the result's bit pattern, which keeps −0.
      */
     private int pointCells(byte[] b, int i, int lim, byte d, float[] dest, int o, int stride,
             int max) {
         int safe = lim - WORD_REACH;
         int k = 0;
+        int f = decimals;
+        long fraction = -1L << (64 - (f << 3));
+        int pointAt = 56 - (f << 3);
+        float scale = FLOAT_POW10[f];
         while (k < max && i < safe) {
             long w = EightDigits.load(b, i + 1);
             int length = EightDigits.numberBytes(w);
             int end = i + 1 + length;
+            long top = w << (64 - (length << 3));
+            if (((top >>> pointAt) & 0xFF) != '.') {
+                int point = EightDigits.firstByte(w, (byte) '.');
+                int g = length - 1 - point;
+                if (point >= length || g < 1 || g == f) {
+                    break;
+                }
+                // another number of decimals: take this cell's and read it again
+                f = g;
+                fraction = -1L << (64 - (f << 3));
+                pointAt = 56 - (f << 3);
+                scale = FLOAT_POW10[f];
+                continue;
+            }
+            long digits = (top & fraction) | ((top << 8) & ~fraction);
             int negative = ((int) w & 0xFF ^ '-') - 1 >>> 31;
-            int point = EightDigits.firstByte(w, (byte) '.');
-            long below = (1L << (point << 3)) - 1;
-            long digits = ((w & below) | ((w >>> 8) & ~below)) + 3 * negative;
-            // the length - 1 bytes left, moved to the top of the word as the conversion wants
-            int shift = 72 - (length << 3);
-            long top = digits << shift;
-            if ((top & EightDigits.BIT_4) != (EightDigits.BIT_4 & (-1L << shift))
-                    | point <= negative | point >= length | b[end] != d) {
+            // the bytes that must be digits: from below the top down to the sign, if any
+            long need = -1L << ((9 - length + negative) << 3);
+            if ((digits & EightDigits.BIT_4 & need) != (EightDigits.BIT_4 & need)
+                    | length - f - negative < 2 | b[end] != d) {
                 break;
             }
-            float v = (float) EightDigits.valueOfTop(top) / FLOAT_POW10[length - point - 1 & 7];
+            float v = (float) EightDigits.valueOfTop(digits & need) / scale;
             dest[o] = Float.intBitsToFloat(Float.floatToRawIntBits(v) | (negative << 31));
             o += stride;
             i = end;
             k++;
         }
+        decimals = f;
         cellsDone = k;
         return i;
     }
