@@ -49,6 +49,8 @@ final class NumberRows {
     private int cellsDone;
     /** The number of decimals {@link #pointCells} expects: that of the last cell it read. */
     private int decimals = 1;
+    /** 10^decimals and its negative, the divisors of {@link #pointCells}. */
+    private final float[] scales = new float[2];
 
     /** The result of scanning one number: where it ended, its significand and power of ten. */
     static final class Cursor {
@@ -144,7 +146,7 @@ final class NumberRows {
 
     /**
      * The bulk of a row read without unit conversion: from the delimiter at {@code i}, up to
-     * {@code max} cells of the commonest form, [-]digits.digits in at most eight bytes and
+     * {@code max} cells of the commonest form, [-][digits].digits in at most eight bytes and
      * followed by the delimiter, stored as floats in {@code dest[o + k · stride]}. Stops at the
      * first cell of any other form (and near the end of the buffer), leaving it to the careful
      * path. Returns the index of the delimiter after the last cell read and sets
@@ -159,9 +161,9 @@ final class NumberRows {
      * left below the top, the digits are exactly those with bit 4 set (the other bytes of the
      * range, minus, point and slash, lack it), so one mask test checks them all, the sign byte
      * excepted; masking the sign byte away leaves the significand's digits with zeros below. At
-     * most 7 digits remain, m < 2^24, and m / 10^f with f ≤ 6 is one correctly rounded division
-     * of exact operands (Clinger, 1990), hence the float nearest the decimal. The sign is set on
-     * the result's bit pattern, which keeps −0.
+     * most 7 digits remain, m < 2^24, and m / ±10^f with f ≤ 7 is one correctly rounded division
+     * of exact operands (Clinger, 1990), hence the float nearest the decimal; dividing by −10^f
+     * for a minus gives the sign (and −0 for a negative zero) at no extra cost.
      */
     private int pointCells(byte[] b, int i, int lim, byte d, float[] dest, int o, int stride,
             int max) {
@@ -170,12 +172,15 @@ final class NumberRows {
         int f = decimals;
         long fraction = -1L << (64 - (f << 3));
         int pointAt = 56 - (f << 3);
-        float scale = FLOAT_POW10[f];
+        float[] scales = this.scales;
+        scales[0] = FLOAT_POW10[f];
+        scales[1] = -FLOAT_POW10[f];
         while (k < max && i < safe) {
             long w = EightDigits.load(b, i + 1);
             int length = EightDigits.numberBytes(w);
             int end = i + 1 + length;
-            long top = w << (64 - (length << 3));
+            int below = 64 - (length << 3);
+            long top = w << below;
             if (((top >>> pointAt) & 0xFF) != '.') {
                 int point = EightDigits.firstByte(w, (byte) '.');
                 int g = length - 1 - point;
@@ -186,19 +191,20 @@ final class NumberRows {
                 f = g;
                 fraction = -1L << (64 - (f << 3));
                 pointAt = 56 - (f << 3);
-                scale = FLOAT_POW10[f];
+                scales[0] = FLOAT_POW10[f];
+                scales[1] = -FLOAT_POW10[f];
                 continue;
             }
             long digits = (top & fraction) | ((top << 8) & ~fraction);
             int negative = ((int) w & 0xFF ^ '-') - 1 >>> 31;
             // the bytes that must be digits: from below the top down to the sign, if any
-            long need = -1L << ((9 - length + negative) << 3);
+            long need = -1L << (below + 8 + (negative << 3));
+            // (an empty cell, length 0, must not pass: its shifts would wrap around)
             if ((digits & EightDigits.BIT_4 & need) != (EightDigits.BIT_4 & need)
-                    | length - f - negative < 2 | b[end] != d) {
+                    | length <= f | b[end] != d) {
                 break;
             }
-            float v = (float) EightDigits.valueOfTop(digits & need) / scale;
-            dest[o] = Float.intBitsToFloat(Float.floatToRawIntBits(v) | (negative << 31));
+            dest[o] = (float) EightDigits.valueOfTop(digits & need) / scales[negative];
             o += stride;
             i = end;
             k++;

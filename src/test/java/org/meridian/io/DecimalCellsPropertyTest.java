@@ -141,6 +141,37 @@ class DecimalCellsPropertyTest {
     }
 
     @Example
+    void anEmptyCellBeforeADecimalIsRefusedWhateverTheDelimiter() throws IOException {
+        // a semicolon has bit 4 set like a digit: an empty cell must still not read as one
+        Path dir = TempDirs.create();
+        try {
+            for (String d : new String[] {"\t", ",", ";"}) {
+                StringBuilder sb = new StringBuilder("time_ms");
+                for (int c = 0; c < 12; c++) {
+                    sb.append(d).append('E').append(c);
+                }
+                sb.append('\n');
+                for (int s = 0; s < 3; s++) {
+                    sb.append(s * 4);
+                    for (int c = 0; c < 12; c++) {
+                        sb.append(d).append(s == 1 && c == 6 ? "" : s == 1 && c == 7 ? "12.3456"
+                                : "-12.3456");
+                    }
+                    sb.append('\n');
+                }
+                Path f = dir.resolve("empty.txt");
+                Files.writeString(f, sb.toString(), StandardCharsets.US_ASCII);
+                Throwable t = catchThrowable(() -> WaveformReader.read(f));
+                // common practice: the cell is named by line and column, counted from 1
+                assertThat(t).as(d).isInstanceOf(ReadException.class).hasMessage(f
+                        + " line 3 column 8: empty cell where a number is expected");
+            }
+        } finally {
+            TempDirs.delete(dir);
+        }
+    }
+
+    @Example
     void aCompressedFileLongerThanTheFirstGuessGrowsItsStorage() throws IOException {
         // no size can be foreseen from a gzip file's last line: storage grows as rows arrive
         int channels = 5;
