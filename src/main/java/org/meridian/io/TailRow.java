@@ -24,13 +24,16 @@ final class TailRow {
      * The expected number of rows, or -1 when there is no reasonable guess (a compressed file,
      * a last line that does not start with a plain number, implausible times).
      *
-     * @param times     the first {@code known} times, in ms
-     * @param toMs      the factor from the file's time unit to ms
-     * @param minBytes  the fewest bytes a row can take (a row has at least one byte per cell
-     *                  and one delimiter or line feed per cell)
+     * <p>A guess is accepted only if the file could hold that many rows (a row takes at least
+     * two bytes per cell: one character and a delimiter or line feed) and their values fit one
+     * array.
+     *
+     * @param times    the first {@code known} times, in ms
+     * @param toMs     the factor from the file's time unit to ms
+     * @param channels the number of value cells in a row
      */
     static int expectedRows(Path file, byte delimiter, double[] times, int known, double toMs,
-            int minBytes) {
+            int channels) {
         if (known < 2) {
             return -1;
         }
@@ -39,7 +42,9 @@ final class TailRow {
             double step = (times[known - 1] - times[0]) / (known - 1);
             double last = lastFirstCell(ch, size, delimiter) * toMs;
             double rows = Math.rint((last - times[0]) / step) + 1;
-            return step > 0 && rows >= known && rows <= size / minBytes + known ? (int) rows : -1;
+            double most = Math.min(size / (2.0 * (channels + 1)) + known,
+                    (double) (Integer.MAX_VALUE - 8) / channels);
+            return step > 0 && rows >= known && rows <= most ? (int) rows : -1;
         } catch (IOException | RuntimeException e) {
             return -1;
         }

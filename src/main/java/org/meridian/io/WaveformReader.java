@@ -100,7 +100,7 @@ public final class WaveformReader {
             if (row == BLOCK_ROWS - 1) {
                 if (columns == null) {
                     int expected = TailRow.expectedRows(file, sc.delimiter(), times, n, toMs,
-                            2 * width);
+                            channels);
                     columns = new ChannelColumns(channels, expected > 0 ? expected
                             : INITIAL_ROWS);
                     if (expected > times.length) {
