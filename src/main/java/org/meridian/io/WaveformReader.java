@@ -42,8 +42,8 @@ public final class WaveformReader {
             String first = pre.firstColumnKey();
             pre.requireColumns(sc);
             return switch (first) {
-                case "time_ms" -> samplesAsRows(sc, pre, 1.0);
-                case "time_s" -> samplesAsRows(sc, pre, 1000.0);
+                case "time_ms" -> samplesAsRows(file, sc, pre, 1.0);
+                case "time_s" -> samplesAsRows(file, sc, pre, 1000.0);
                 case "channel" -> channelsAsRows(sc, pre);
                 default -> throw sc.error(1, "the header starts with "
                         + LineScanner.quote(pre.columns().get(0)) + "; a waveform file starts with"
@@ -53,20 +53,21 @@ public final class WaveformReader {
     }
 
     /**
-     * Samples as rows. Values arrive sample-major; they are parsed straight into blocks of
-     * {@value #BLOCK_ROWS} rows held channel-major (small enough to stay in cache while they
-     * fill), and at the end each block's channel runs are copied into the one array of the exact
-     * size.
+     * Samples as rows. Values arrive sample-major; they are parsed straight into one block of
+     * {@value #BLOCK_ROWS} rows held channel-major (small enough to stay in cache while it
+     * fills), and each full block's channel runs are copied into the channel-major result
+     * ({@link ChannelColumns}), sized from the first block's times and the file's last time
+     * ({@link TailRow}).
      */
-    private static Waveforms samplesAsRows(LineScanner sc, Preamble pre, double toMs) {
+    private static Waveforms samplesAsRows(Path file, LineScanner sc, Preamble pre, double toMs) {
         List<String> labels = labels(sc, pre.columns().subList(1, pre.columns().size()), 2);
         int channels = labels.size();
         int width = channels + 1;
         double factor = pre.unit().factor();
         double[] times = new double[INITIAL_ROWS];
         int[] lines = new int[INITIAL_ROWS];
-        List<float[]> blocks = new ArrayList<>();
         float[] block = new float[BLOCK_ROWS * channels];
+        ChannelColumns columns = null;
         int n = 0;
         while (true) {
             if (n == times.length) {
@@ -96,30 +97,33 @@ public final class WaveformReader {
             times[n] *= toMs;
             lines[n] = sc.line();
             n++;
-            if (n % BLOCK_ROWS == 0) {
-                blocks.add(block);
-                block = new float[BLOCK_ROWS * channels];
+            if (row == BLOCK_ROWS - 1) {
+                if (columns == null) {
+                    int expected = TailRow.expectedRows(file, sc.delimiter(), times, n, toMs,
+                            channels);
+                    columns = new ChannelColumns(channels, expected > 0 ? expected
+                            : INITIAL_ROWS);
+                    if (expected > times.length) {
+                        times = Arrays.copyOf(times, expected + 1);
+                        lines = Arrays.copyOf(lines, expected + 1);
+                    }
+                }
+                columns.add(block, BLOCK_ROWS, BLOCK_ROWS);
             }
         }
         if (n == 0) {
             throw new ReadException(sc.file(), pre.headerLine(), 0, "a header but no data rows");
         }
+        if (columns == null) {
+            columns = new ChannelColumns(channels, n);
+        }
         if (n % BLOCK_ROWS != 0) {
-            blocks.add(block);
+            columns.add(block, BLOCK_ROWS, n % BLOCK_ROWS);
         }
         final int[] rowLines = lines;
         TimeAxis axis = Sampling.axis(times, n, (i, problem) ->
                 new ReadException(sc.file(), rowLines[i], 1, problem));
-        float[] byChannel = new float[Math.multiplyExact(channels, n)];
-        for (int k = 0; k < blocks.size(); k++) {
-            float[] rows = blocks.get(k);
-            int first = k * BLOCK_ROWS;
-            int count = Math.min(BLOCK_ROWS, n - first);
-            for (int c = 0; c < channels; c++) {
-                System.arraycopy(rows, c * BLOCK_ROWS, byChannel, c * n + first, count);
-            }
-        }
-        return Waveforms.wrap(labels, axis, pre.unit().unit(), byChannel);
+        return Waveforms.wrap(labels, axis, pre.unit().unit(), columns.values());
     }
 
     /** Channels as rows: the header holds the times, each row one channel. */
