@@ -74,7 +74,7 @@ public class CursorStepBench {
         Study study = study128();
         StudyOpener.Opened opened = StudyOpener.prepare(StudySession.of(study, null, "bench"),
                 new ViewOptions(OptionalDouble.of(300), OptionalDouble.of(500), OptionalDouble.of(300),
-                        "Pz", List.of(), ""), IntervalKind.WITHIN, quiet());
+                        "Pz", List.of(), ""), IntervalKind.WITHIN, Tasks.TaskProgress.NONE);
         screen = new BufferedImage(WIDTH, HEIGHT, BufferedImage.TYPE_INT_RGB);
         onEdt(() -> {
             Theme.LIGHT.install();
@@ -223,18 +223,6 @@ public class CursorStepBench {
         SwingUtilities.invokeAndWait(r);
     }
 
-    private static Tasks.TaskProgress quiet() {
-        return new Tasks.TaskProgress() {
-            @Override
-            public void update(long done, long total) {
-            }
-
-            @Override
-            public boolean cancelled() {
-                return false;
-            }
-        };
-    }
 
     /**
      * 128 channels ({@link MapFrameBench#montage128}), 8 participants, conditions "rare" and

@@ -20,19 +20,9 @@ import org.openjdk.jmh.annotations.State;
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 public class OpenDemoBench {
-    private static final Tasks.TaskProgress QUIET = new Tasks.TaskProgress() {
-        @Override
-        public void update(long done, long total) {
-        }
-
-        @Override
-        public boolean cancelled() {
-            return false;
-        }
-    };
 
     @Benchmark
     public Object openTheDemo() {
-        return StudyOpener.run(null, ViewOptions.defaults(), IntervalKind.WITHIN, QUIET);
+        return StudyOpener.run(null, ViewOptions.defaults(), IntervalKind.WITHIN, Tasks.TaskProgress.NONE);
     }
 }

@@ -33,6 +33,18 @@ public final class Tasks {
 
     /** What a running job may report and must respect. */
     public interface TaskProgress extends org.meridian.io.StudyLoader.Progress {
+        /** Reports nothing and is never cancelled: for work run outside the window (tests, benchmarks). */
+        TaskProgress NONE = new TaskProgress() {
+            @Override
+            public void update(long done, long total) {
+            }
+
+            @Override
+            public boolean cancelled() {
+                return false;
+            }
+        };
+
         /** {@code done} of {@code total} units are finished. */
         void update(long done, long total);
 

@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.catchThrowable;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -24,16 +23,11 @@ class NumberAndTimeEdgesTest {
     Path dir;
 
     private Path file(String name, String text) throws IOException {
-        Path f = dir.resolve(name);
-        Files.writeString(f, text, StandardCharsets.UTF_8);
-        return f;
+        return LoadErrors.write(dir, name, text);
     }
 
     private static String error(Path arg) {
-        Throwable t = catchThrowable(() -> StudyLoader.load(arg));
-        assertThat(t).isInstanceOf(ReadException.class);
-        assertThat(t.getMessage()).doesNotContain("\n");
-        return t.getMessage();
+        return LoadErrors.message(arg, ReadException.class);
     }
 
     @Test

@@ -1,7 +1,6 @@
 package org.meridian.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.assertj.core.api.Assertions.catchThrowable;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -17,17 +16,11 @@ class ReadErrorMessagesTest {
     Path dir;
 
     private Path file(String name, String text) throws IOException {
-        Path f = dir.resolve(name);
-        Files.createDirectories(f.getParent());
-        Files.writeString(f, text, StandardCharsets.UTF_8);
-        return f;
+        return LoadErrors.write(dir, name, text);
     }
 
-    private String error(Path arg) {
-        Throwable t = catchThrowable(() -> StudyLoader.load(arg));
-        assertThat(t).isInstanceOf(BadInputException.class);
-        assertThat(t.getMessage()).doesNotContain("\n");
-        return t.getMessage();
+    private static String error(Path arg) {
+        return LoadErrors.message(arg, BadInputException.class);
     }
 
     @Test

@@ -28,20 +28,10 @@ class AveragesTest {
         entries = ViewModel.entriesFor(session, List.of(ConditionExpression.parse("rare - frequent", study)));
     }
 
-    private static final Tasks.TaskProgress QUIET = new Tasks.TaskProgress() {
-        @Override
-        public void update(long done, long total) {
-        }
-
-        @Override
-        public boolean cancelled() {
-            return false;
-        }
-    };
 
     @Test
     void theGfpIsThePopulationStandardDeviationOfEachMap() {
-        Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, QUIET);
+        Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, Tasks.TaskProgress.NONE);
         Averages.WaveAverage rare = a.wave("rare");
         Waveforms field = rare.grand().select(session.fieldChannels());
         double[] map = new double[field.channelCount()];
@@ -55,7 +45,7 @@ class AveragesTest {
 
     @Test
     void leftOutParticipantsLeaveEveryAverageAndBand() {
-        Averages a = Averages.compute(session, entries, Set.of("p02"), IntervalKind.WITHIN, QUIET);
+        Averages a = Averages.compute(session, entries, Set.of("p02"), IntervalKind.WITHIN, Tasks.TaskProgress.NONE);
         Waveforms expected = GrandAverage.of(session.study(), entries.get(2).wave(),
                 GrandAverage.Weighting.UNWEIGHTED, Set.of("p02"));
         Waveforms got = a.wave("rare - frequent").grand();
@@ -72,7 +62,7 @@ class AveragesTest {
 
     @Test
     void theCsdOfTheGrandAverageIsTheGrandAverageOfTheCsds() {
-        Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, QUIET);
+        Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, Tasks.TaskProgress.NONE);
         Waveforms csdOfGrand = a.wave("rare").csd();
         assertThat(csdOfGrand.unit()).isEqualTo(Unit.MICROVOLT_PER_SQUARE_METRE);
         Study study = session.study();
@@ -94,7 +84,7 @@ class AveragesTest {
 
     @Test
     void theAutomaticColourRangeIsTheLargestValueAtTheElectrodes() {
-        Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, QUIET);
+        Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, Tasks.TaskProgress.NONE);
         Waveforms field = a.wave("rare").grand().select(session.fieldChannels());
         double max = 0;
         for (float v : field.copyValues()) {

@@ -33,16 +33,6 @@ class FigureComposerExportTest {
                 """, "composer");
     }
 
-    private static final Tasks.TaskProgress QUIET = new Tasks.TaskProgress() {
-        @Override
-        public void update(long done, long total) {
-        }
-
-        @Override
-        public boolean cancelled() {
-            return false;
-        }
-    };
 
     @BeforeAll
     static void load() {
@@ -71,7 +61,7 @@ class FigureComposerExportTest {
         Study read = StudyLoader.load(folder);
         Path manifest = folder.resolve("study.tsv");
         byte[] before = Files.readAllBytes(manifest);
-        assertThatThrownBy(() -> FigureComposerExport.run(spec(), read, folder, manifest, 300, QUIET))
+        assertThatThrownBy(() -> FigureComposerExport.run(spec(), read, folder, manifest, 300, Tasks.TaskProgress.NONE))
                 .isInstanceOf(BadInputException.class)
                 .hasMessageStartingWith("the figure: ")
                 .hasMessageContaining("is an input file of the study");
@@ -81,7 +71,7 @@ class FigureComposerExportTest {
     @Test
     void aStudyInMemoryIsSavedBesideTheFigureAndTheSpecRefersToIt(@TempDir Path dir) throws Exception {
         Path svg = dir.resolve("late peak.svg");
-        FigureComposerExport.Result r = FigureComposerExport.run(spec(), simulated, null, svg, 300, QUIET);
+        FigureComposerExport.Result r = FigureComposerExport.run(spec(), simulated, null, svg, 300, Tasks.TaskProgress.NONE);
         assertThat(r.writtenStudy()).isEqualTo(dir.resolve("late peak-study"));
         assertThat(r.spec()).isEqualTo(dir.resolve("late peak.json"));
         FigureSpec saved = SpecFiles.read(r.spec());
@@ -93,7 +83,7 @@ class FigureComposerExportTest {
         // what the window exported is what the figure command makes from the saved spec (issue 8)
         assertThat(Files.readString(svg, StandardCharsets.UTF_8)).isEqualTo(Figures.svg(Figures.load(r.spec())));
         // exporting again replaces the study folder it wrote before
-        assertThat(FigureComposerExport.run(spec(), simulated, null, svg, 300, QUIET).writtenStudy())
+        assertThat(FigureComposerExport.run(spec(), simulated, null, svg, 300, Tasks.TaskProgress.NONE).writtenStudy())
                 .isEqualTo(r.writtenStudy());
     }
 
@@ -101,7 +91,7 @@ class FigureComposerExportTest {
     void aStudyOnDiskIsReferredToAndNotCopied(@TempDir Path dir) {
         Path demo = Path.of("samples", "two-tone-listening").toAbsolutePath();
         Path pdf = dir.resolve("fig.pdf");
-        FigureComposerExport.Result r = FigureComposerExport.run(spec(), StudyLoader.load(demo), demo, pdf, 300, QUIET);
+        FigureComposerExport.Result r = FigureComposerExport.run(spec(), StudyLoader.load(demo), demo, pdf, 300, Tasks.TaskProgress.NONE);
         assertThat(r.writtenStudy()).isNull();
         assertThat(Files.exists(dir.resolve("fig-study"))).isFalse();
         assertThat(Figures.studyPath(SpecFiles.read(r.spec()), r.spec())).isEqualTo(demo.normalize());
@@ -112,7 +102,7 @@ class FigureComposerExportTest {
     void aFolderThatIsNotAStudyIsNeverReplaced(@TempDir Path dir) throws Exception {
         Path mine = Files.createDirectories(dir.resolve("fig-study"));
         Files.writeString(mine.resolve("notes.txt"), "keep me");
-        assertThatThrownBy(() -> FigureComposerExport.run(spec(), simulated, null, dir.resolve("fig.svg"), 300, QUIET))
+        assertThatThrownBy(() -> FigureComposerExport.run(spec(), simulated, null, dir.resolve("fig.svg"), 300, Tasks.TaskProgress.NONE))
                 .isInstanceOf(BadInputException.class).hasMessageContaining("holds no study");
         assertThat(Files.readString(mine.resolve("notes.txt"))).isEqualTo("keep me");
     }

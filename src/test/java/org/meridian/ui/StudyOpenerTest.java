@@ -22,21 +22,11 @@ class StudyOpenerTest {
         study = Simulator.simulate(ListeningDemo.scenario(3), 5).study();
     }
 
-    private static final Tasks.TaskProgress QUIET = new Tasks.TaskProgress() {
-        @Override
-        public void update(long done, long total) {
-        }
-
-        @Override
-        public boolean cancelled() {
-            return false;
-        }
-    };
 
     @Test
     void aTwoConditionStudyOpensOnItsDifferenceWaveInTheLateWindowAtPz() {
         StudyOpener.Opened o = StudyOpener.prepare(StudySession.of(study, null, "three"),
-                ViewOptions.defaults(), IntervalKind.WITHIN, QUIET);
+                ViewOptions.defaults(), IntervalKind.WITHIN, Tasks.TaskProgress.NONE);
         ViewDefaults d = o.defaults();
         assertThat(d.windowStartMs()).isEqualTo(300);
         assertThat(d.windowEndMs()).isEqualTo(500);
@@ -53,7 +43,7 @@ class StudyOpenerTest {
         ViewOptions options = new ViewOptions(OptionalDouble.of(260), OptionalDouble.of(460),
                 OptionalDouble.of(352), "cz", List.of("rare", "frequent - rare"), "frequent - rare");
         StudyOpener.Opened o = StudyOpener.prepare(StudySession.of(study, null, "three"), options,
-                IntervalKind.NONE, QUIET);
+                IntervalKind.NONE, Tasks.TaskProgress.NONE);
         assertThat(o.defaults().channels()).containsExactly("Cz");
         assertThat(o.defaults().shownWaves()).containsExactly("rare", "frequent - rare");
         assertThat(o.defaults().mapWave()).isEqualTo("frequent - rare");
