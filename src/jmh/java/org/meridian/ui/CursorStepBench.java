@@ -223,7 +223,6 @@ public class CursorStepBench {
         SwingUtilities.invokeAndWait(r);
     }
 
-
     /**
      * 128 channels ({@link MapFrameBench#montage128}), 8 participants, conditions "rare" and
      * "frequent": a central-parietal late positivity larger in "rare", a frontal negativity

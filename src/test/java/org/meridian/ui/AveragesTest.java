@@ -28,7 +28,6 @@ class AveragesTest {
         entries = ViewModel.entriesFor(session, List.of(ConditionExpression.parse("rare - frequent", study)));
     }
 
-
     @Test
     void theGfpIsThePopulationStandardDeviationOfEachMap() {
         Averages a = Averages.compute(session, entries, Set.of(), IntervalKind.NONE, Tasks.TaskProgress.NONE);

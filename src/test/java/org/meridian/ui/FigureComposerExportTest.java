@@ -33,7 +33,6 @@ class FigureComposerExportTest {
                 """, "composer");
     }
 
-
     @BeforeAll
     static void load() {
         // four participants of the bundled demo, held in memory with no folder (as the simulated demo)

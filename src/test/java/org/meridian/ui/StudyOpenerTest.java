@@ -22,7 +22,6 @@ class StudyOpenerTest {
         study = Simulator.simulate(ListeningDemo.scenario(3), 5).study();
     }
 
-
     @Test
     void aTwoConditionStudyOpensOnItsDifferenceWaveInTheLateWindowAtPz() {
         StudyOpener.Opened o = StudyOpener.prepare(StudySession.of(study, null, "three"),
