@@ -9,8 +9,8 @@ package org.meridian.measure;
  *
  * <p>The sums are kept in two halves (samples from, from + 2, … and from + 1, from + 3, …), which
  * halves the chain of dependent additions; the order of every addition is fixed, so results are
- * the same bit for bit on every run. The extreme's
- * comparisons ride along in the same loop, where the additions' latency leaves room for them.
+ * the same bit for bit on every run. The extreme's comparisons ride along in the same loop,
+ * where the additions' latency leaves room for them.
  *
  * <p>Crossings: a wave near zero crosses it at random, every few samples if it is noisy, so a
  * test and branch at every interval is mispredicted at every crossing, which costs more than
