@@ -140,6 +140,8 @@ class MeasureReferenceTest {
             int from = trial % 3 == 0 ? 0 : random.nextInt(20);
             int to = trial < 60 ? from + trial % 40 : AXIS.samples() - 1 - random.nextInt(10);
             Trace t = new Trace(x, AXIS, from, to);
+            // against the exact integral of each part of the piecewise-linear wave, crossings
+            // found by similar triangles (textbook geometry)
             assertThat(t.area(Polarity.POSITIVE)).as("trial %d", trial)
                     .isCloseTo(positiveAreaByDefinition(x, from, to, dt), within(1e-9));
             assertThat(t.area(Polarity.NEGATIVE)).as("trial %d", trial)
